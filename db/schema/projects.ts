@@ -1,0 +1,30 @@
+// A project is one structure under one construction contract; membership decides who sees its requests.
+import { pgTable, text, timestamp, uuid, integer, primaryKey, index } from 'drizzle-orm/pg-core';
+import { users } from './auth';
+
+export const projects = pgTable('projects', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  // Short code that prefixes request numbers, e.g. "PC-0114".
+  code: text('code').notNull().unique(),
+  name: text('name').notNull(),
+  structureNumber: text('structure_number').notNull(),
+  featureCarried: text('feature_carried').notNull(),
+  featureCrossed: text('feature_crossed').notNull(),
+  county: text('county').notNull(),
+  contractNumber: text('contract_number').notNull(),
+  contractorFirm: text('contractor_firm').notNull(),
+  section: text('section').notNull(),
+  // Next request sequence; incremented under the row lock of the filing transaction.
+  nextRequestSeq: integer('next_request_seq').notNull().default(1),
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+});
+
+export const projectMembers = pgTable(
+  'project_members',
+  {
+    projectId: uuid('project_id').notNull().references(() => projects.id, { onDelete: 'cascade' }),
+    userId: text('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
+    addedAt: timestamp('added_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.projectId, t.userId] }), index('project_members_user_idx').on(t.userId)],
+);

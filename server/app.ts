@@ -1,0 +1,68 @@
+// Builds the Express app from its parts; tests build it with their own parts and call it with supertest.
+import express, { Router } from 'express';
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import { toNodeHandler } from 'better-auth/node';
+import type { Database } from '../db/client';
+import type { Auth } from './auth/auth';
+import { actorOf, requireActor } from './auth/requireActor';
+import { devMailRoutes } from './dev/devMailRoutes';
+import { healthRoutes } from './health/healthRoutes';
+import { errorHandler, HttpError } from './http/errors';
+import type { Mailer } from './mail/mailer';
+import { projectRoutes } from './projects/projectRoutes';
+import { requestRoutes } from './requests/requestRoutes';
+import { createRequestService } from './requests/requestService';
+import type { ObjectStore } from './storage/objectStore';
+import type { ServerEnv } from './env';
+
+export type AppParts = {
+  env: ServerEnv;
+  db: Database;
+  auth: Auth;
+  store: ObjectStore;
+  mailer: Mailer;
+  onMailQueued: () => void;
+};
+
+export function createApp(parts: AppParts) {
+  const { env, db, auth, store, mailer } = parts;
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  // better-auth reads its own body, so it is mounted before the JSON parser.
+  app.all('/api/auth/*splat', toNodeHandler(auth));
+  app.use(express.json({ limit: '256kb' }));
+
+  app.use(healthRoutes({ db, store, mailer }));
+  if (env.NODE_ENV !== 'production' && env.MAIL_CATCHER_URL) app.use(devMailRoutes(env.MAIL_CATCHER_URL));
+
+  const signedIn = Router();
+  signedIn.use('/api', requireActor(auth));
+  signedIn.get('/api/me', (req, res) => {
+    res.json(actorOf(req));
+  });
+  signedIn.use(projectRoutes(db));
+  signedIn.use(
+    requestRoutes(createRequestService({ db, store, publicUrl: env.PUBLIC_URL, onMailQueued: parts.onMailQueued }), {
+      maxFileBytes: env.UPLOAD_MAX_FILE_BYTES,
+    }),
+  );
+  app.use(signedIn);
+
+  app.use('/api', (_req, _res, next) => next(new HttpError(404, 'no_such_route', 'There is no such API route.')));
+
+  // The exported web app: static files, and index.html for every client-side route.
+  if (env.WEB_DIST && existsSync(join(env.WEB_DIST, 'index.html'))) {
+    const dist = env.WEB_DIST;
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.get('/*splat', (_req, res) => {
+      res.setHeader('cache-control', 'no-cache');
+      res.sendFile(join(dist, 'index.html'));
+    });
+  }
+
+  app.use(errorHandler);
+  return app;
+}

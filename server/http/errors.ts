@@ -1,0 +1,61 @@
+// One error shape for every API answer: { error: { code, message, fields? } }.
+import type { ErrorRequestHandler } from 'express';
+import { MulterError } from 'multer';
+import type { ZodError } from 'zod';
+
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields?: Record<string, string>,
+  ) {
+    super(message);
+  }
+}
+
+export function validationError(error: ZodError, message = 'Some fields need attention.'): HttpError {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    if (issue.code === 'unrecognized_keys') {
+      for (const key of issue.keys) fields[key] = 'This field is not accepted here.';
+    } else {
+      const key = issue.path.join('.') || '_';
+      fields[key] ??= issue.message;
+    }
+  }
+  return new HttpError(400, 'invalid_input', message, fields);
+}
+
+const multerMessages: Record<string, [number, string]> = {
+  LIMIT_FILE_SIZE: [413, 'A file is larger than the upload limit.'],
+  LIMIT_FILE_COUNT: [413, 'Too many files in one request.'],
+  LIMIT_PART_COUNT: [413, 'Too many parts in one upload.'],
+  LIMIT_FIELD_KEY: [400, 'A field name is too long.'],
+  LIMIT_FIELD_VALUE: [413, 'A field value is too long.'],
+  LIMIT_FIELD_COUNT: [400, 'Too many fields.'],
+  LIMIT_UNEXPECTED_FILE: [400, 'Files must be sent in the "files" field.'],
+};
+
+export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
+  if (res.headersSent) return;
+  if (err instanceof HttpError) {
+    res.status(err.status).json({ error: { code: err.code, message: err.message, fields: err.fields } });
+    return;
+  }
+  if (err instanceof MulterError) {
+    const [status, message] = multerMessages[err.code] ?? [400, 'The upload could not be read.'];
+    res.status(status).json({ error: { code: err.code.toLowerCase(), message } });
+    return;
+  }
+  if (err && typeof err === 'object' && 'type' in err && err.type === 'entity.parse.failed') {
+    res.status(400).json({ error: { code: 'malformed_body', message: 'The request body is not valid JSON.' } });
+    return;
+  }
+  if (err && typeof err === 'object' && 'type' in err && err.type === 'entity.too.large') {
+    res.status(413).json({ error: { code: 'body_too_large', message: 'The request body is too large.' } });
+    return;
+  }
+  console.error('[spanrelay] unexpected error', err);
+  res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. Try again; if it keeps happening, tell your administrator.' } });
+};

@@ -1,0 +1,31 @@
+// Outgoing mail through nodemailer; in development and tests the SMTP server is the local catcher.
+import nodemailer from 'nodemailer';
+import type { ServerEnv } from '../env';
+
+export type OutgoingMail = { to: string; subject: string; text: string };
+
+export type Mailer = { send(mail: OutgoingMail): Promise<void>; isUp(): Promise<boolean>; close(): void };
+
+export function createMailer(env: ServerEnv): Mailer {
+  const transport = nodemailer.createTransport({
+    host: env.SMTP_HOST,
+    port: env.SMTP_PORT,
+    secure: false,
+    ignoreTLS: env.NODE_ENV !== 'production',
+    connectionTimeout: 3000,
+    greetingTimeout: 3000,
+  });
+  return {
+    async send(mail) {
+      await transport.sendMail({ from: env.MAIL_FROM, to: mail.to, subject: mail.subject, text: mail.text });
+    },
+    async isUp() {
+      try {
+        return await transport.verify();
+      } catch {
+        return false;
+      }
+    },
+    close: () => transport.close(),
+  };
+}
