@@ -57,7 +57,7 @@ export function createApp(parts: AppParts) {
   if (env.WEB_DIST && existsSync(join(env.WEB_DIST, 'index.html'))) {
     const dist = env.WEB_DIST;
     app.use(express.static(dist, { index: false, maxAge: '1h' }));
-    app.get('/*splat', (_req, res) => {
+    app.get('/{*splat}', (_req, res) => {
       res.setHeader('cache-control', 'no-cache');
       res.sendFile(join(dist, 'index.html'));
     });

@@ -1,0 +1,1 @@
+export { SignedInLayout as default } from '../../features/shell/SignedInLayout';

@@ -1,0 +1,1 @@
+export { RequestDetailScreen as default } from '../../../features/requests/RequestDetailScreen';

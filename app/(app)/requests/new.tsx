@@ -1,0 +1,1 @@
+export { NewRequestScreen as default } from '../../../features/requests/NewRequestScreen';

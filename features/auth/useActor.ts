@@ -1,0 +1,51 @@
+// Who is signed in, with the role and organization Spanrelay keeps on the account.
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { Actor } from '../../shared/requests/types';
+import { apiFetch, ApiError } from '../api/http';
+import { authClient } from './authClient';
+
+export const actorKey = ['actor'] as const;
+
+export function useActor() {
+  return useQuery({
+    queryKey: actorKey,
+    queryFn: async (): Promise<Actor | null> => {
+      try {
+        return await apiFetch<Actor>('/api/me');
+      } catch (err) {
+        if (err instanceof ApiError && err.status === 401) return null;
+        throw err;
+      }
+    },
+    staleTime: 60_000,
+  });
+}
+
+export function useSignIn() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: { email: string; password: string }) => {
+      const { error } = await authClient.signIn.email(input);
+      if (error) throw new ApiError(error.status, error.code ?? 'sign_in_failed', signInMessage(error.status, error.message));
+    },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: actorKey }),
+  });
+}
+
+function signInMessage(status: number, message: string | undefined): string {
+  if (status === 401) return 'That e-mail and password do not match an account.';
+  if (status === 429) return 'Too many attempts; wait a minute and try again.';
+  return message || 'Signing in failed; try again.';
+}
+
+export function useSignOut() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async () => {
+      await authClient.signOut();
+    },
+    onSuccess: () => {
+      queryClient.clear();
+    },
+  });
+}

@@ -1,0 +1,56 @@
+// What waits at the signed-in person's desk, then everything else they may see.
+import { useRouter } from 'expo-router';
+import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import { roleLabels } from '../../shared/roles';
+import { useActor } from '../auth/useActor';
+import { Button } from '../ui/Button';
+import { Notice } from '../ui/Notice';
+import { Screen } from '../ui/Screen';
+import { Text } from '../ui/Text';
+import { space } from '../ui/theme';
+import { useRequestList } from './api';
+import { RequestCard } from './RequestCard';
+
+export function DeskScreen() {
+  const router = useRouter();
+  const { data: actor } = useActor();
+  const desk = useRequestList('desk');
+  const all = useRequestList('all');
+  const deskIds = new Set((desk.data ?? []).map((r) => r.id));
+  const elsewhere = (all.data ?? []).filter((r) => !deskIds.has(r.id));
+
+  return (
+    <Screen wide>
+      <View style={styles.head}>
+        <View style={styles.headText}>
+          <Text variant="title">My desk</Text>
+          {actor ? <Text variant="muted">{roleLabels[actor.role]} · {actor.organization ?? actor.email}</Text> : null}
+        </View>
+        {actor?.role === 'contractor' ? <Button label="New request" onPress={() => router.push('/requests/new')} testID="desk-new-request" /> : null}
+      </View>
+
+      <Text variant="heading">Waiting for me ({desk.data?.length ?? 0})</Text>
+      {desk.isPending ? <ActivityIndicator /> : null}
+      {desk.error ? <Notice tone="error">{desk.error.message}</Notice> : null}
+      {desk.data?.length === 0 ? <Notice tone="info">Nothing is waiting at your desk.</Notice> : null}
+      <View style={styles.list} testID="desk-waiting">
+        {desk.data?.map((r) => <RequestCard key={r.id} request={r} />)}
+      </View>
+
+      {elsewhere.length > 0 ? (
+        <>
+          <Text variant="heading">On other desks ({elsewhere.length})</Text>
+          <View style={styles.list} testID="desk-elsewhere">
+            {elsewhere.map((r) => <RequestCard key={r.id} request={r} />)}
+          </View>
+        </>
+      ) : null}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: space.lg, flexWrap: 'wrap' },
+  headText: { gap: space.xs, flexShrink: 1 },
+  list: { gap: space.md },
+});
