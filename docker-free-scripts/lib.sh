@@ -5,6 +5,8 @@ set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
 DATA="$ROOT/.data"
 mkdir -p "$DATA"
+# The AWS SDK version is pinned in the lock file; its notice about future Node versions is noise here.
+export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
 
 log() { printf '[spanrelay] %s\n' "$*" >&2; }
 
