@@ -11,8 +11,8 @@ for (const file of process.argv.slice(2)) {
     passed += report.numPassedTests;
     failed += report.numFailedTests;
     skipped += report.numPendingTests + (report.numTodoTests ?? 0);
-    // A file that failed to load has no tests in it but still failed.
-    failed += report.testResults.filter((r) => r.status === 'failed' && r.assertionResults.length === 0).length;
+    // A file whose setup failed has no failed test in it, only skipped ones, but it did fail.
+    failed += report.testResults.filter((r) => r.status === 'failed' && !r.assertionResults.some((a) => a.status === 'failed')).length;
   } catch {
     console.error(`missing or unreadable test report: ${file}`);
     failed += 1;
