@@ -10,21 +10,27 @@ ensure_node_modules
 pg_up pg-dev "$PG_PORT"
 pg_ensure_db "$PG_PORT" spanrelay
 
+TSX="$ROOT/node_modules/.bin/tsx"
 FAKES_PID=""
+SERVER_PID=""
 cleanup() {
-  [ -n "$FAKES_PID" ] && kill "$FAKES_PID" 2>/dev/null || true
+  for pid in $SERVER_PID $FAKES_PID; do kill -TERM "$pid" 2>/dev/null || true; done
+  for pid in $SERVER_PID $FAKES_PID; do wait "$pid" 2>/dev/null || true; done
   pg_down pg-dev
 }
 trap cleanup EXIT
 trap 'exit 130' INT TERM
 
 if ! wait_for_http "$MAIL_CATCHER_URL/messages" 1; then
-  FAKES_DIR="$DATA/fakes-dev" npx tsx docker-free-scripts/fakes/run-fakes.ts >"$DATA/fakes-dev.log" 2>&1 &
+  FAKES_DIR="$DATA/fakes-dev" "$TSX" docker-free-scripts/fakes/run-fakes.ts >"$DATA/fakes-dev.log" 2>&1 &
   FAKES_PID=$!
   wait_for_http "$MAIL_CATCHER_URL/messages" || { cat "$DATA/fakes-dev.log" >&2; exit 1; }
 fi
 
-npx tsx docker-free-scripts/migrate-and-seed.ts
+"$TSX" docker-free-scripts/migrate-and-seed.ts
 ensure_web_export
 export WEB_DIST="$ROOT/dist"
-npx tsx server/index.ts
+# In the background and waited for, so Ctrl-C or a TERM reaches the trap at once.
+"$TSX" server/index.ts &
+SERVER_PID=$!
+wait "$SERVER_PID"
