@@ -97,6 +97,8 @@ export type DeckPlacementPlan = {
   };
   /** Wet concrete load used for the moment diagram and the stage check. */
   deadLoadKipPerFt: number;
+  /** Support stations, 0 at the left end support, for drawing the plan. */
+  supportsFt: number[];
   inflectionPointsFt: number[];
   stageCheck: StageCheck;
   emergencyJointZones: EmergencyJointZone[];
@@ -176,6 +178,7 @@ export function planDeckPlacement(input: DeckPlacementInput): DeckPlacementPlan 
     segments,
     singlePlacement: { volumeCy, durationHr, minInitialSetHr, volumeM3: cyToM3(volumeCy), setTimeMarginHr },
     deadLoadKipPerFt,
+    supportsFt: beam.supportsFt,
     inflectionPointsFt: beam.inflectionPointsFt,
     stageCheck: check,
     emergencyJointZones,
