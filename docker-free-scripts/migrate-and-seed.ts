@@ -8,7 +8,7 @@ async function main() {
   if (!url) throw new Error('DATABASE_URL is not set');
   const { db, pool } = createDatabase(url, 2);
   try {
-    await runMigrations(db);
+    await runMigrations(db, pool);
     await seedDemo(db);
   } finally {
     await pool.end();

@@ -12,7 +12,6 @@ import { errorHandler, HttpError } from './http/errors';
 import type { Mailer } from './mail/mailer';
 import { projectRoutes } from './projects/projectRoutes';
 import { requestRoutes } from './requests/requestRoutes';
-import { createRequestService } from './requests/requestService';
 import type { ObjectStore } from './storage/objectStore';
 import type { ServerEnv } from './env';
 
@@ -22,7 +21,6 @@ export type AppParts = {
   auth: Auth;
   store: ObjectStore;
   mailer: Mailer;
-  onMailQueued: () => void;
 };
 
 export function createApp(parts: AppParts) {
@@ -44,11 +42,7 @@ export function createApp(parts: AppParts) {
     res.json(actorOf(req));
   });
   signedIn.use(projectRoutes(db));
-  signedIn.use(
-    requestRoutes(createRequestService({ db, store, publicUrl: env.PUBLIC_URL, onMailQueued: parts.onMailQueued }), {
-      maxFileBytes: env.UPLOAD_MAX_FILE_BYTES,
-    }),
-  );
+  signedIn.use(requestRoutes({ db, store, publicUrl: env.PUBLIC_URL, maxFileBytes: env.UPLOAD_MAX_FILE_BYTES }));
   app.use(signedIn);
 
   app.use('/api', (_req, _res, next) => next(new HttpError(404, 'no_such_route', 'There is no such API route.')));

@@ -1,29 +1,22 @@
-// The process entry: read settings, connect, migrate, listen; stop cleanly on SIGTERM/SIGINT.
+// The process entry: read settings, connect, migrate, start the job worker, listen; stop cleanly
+// on SIGTERM/SIGINT.
+import { setTimeout } from 'node:timers';
 import { createDatabase } from '../db/client';
 import { runMigrations } from '../db/migrate';
 import { createApp } from './app';
 import { createAuth } from './auth/auth';
 import { readServerEnv } from './env';
+import { startBackgroundJobs } from './jobs';
 import { createMailer } from './mail/mailer';
-import { createOutboxDispatcher } from './mail/outbox';
 import { createObjectStore } from './storage/objectStore';
 
 async function main() {
   const env = readServerEnv();
   const { db, pool } = createDatabase(env.DATABASE_URL);
-  await runMigrations(db);
+  await runMigrations(db, pool);
   const mailer = createMailer(env);
-  const outbox = createOutboxDispatcher(db, mailer);
-  const app = createApp({
-    env,
-    db,
-    auth: createAuth(db, env),
-    store: createObjectStore(env),
-    mailer,
-    onMailQueued: () => void outbox.kick(),
-  });
-  outbox.start();
-  void outbox.kick();
+  const app = createApp({ env, db, auth: createAuth(db, env), store: createObjectStore(env), mailer });
+  const jobs = await startBackgroundJobs({ pool, db, mailer, publicUrl: env.PUBLIC_URL });
 
   const server = app.listen(env.PORT, '127.0.0.1', () => {
     console.log(`Spanrelay is running at http://127.0.0.1:${env.PORT}`);
@@ -37,13 +30,13 @@ async function main() {
   const stop = () => {
     if (stopping) return;
     stopping = true;
-    outbox.stop();
     server.close(async () => {
+      await jobs.stop();
       mailer.close();
       await pool.end();
       process.exit(0);
     });
-    setTimeout(() => process.exit(0), 5000).unref();
+    setTimeout(() => process.exit(0), 8000).unref();
   };
   process.on('SIGTERM', stop);
   process.on('SIGINT', stop);

@@ -1,5 +1,6 @@
 // A project is one structure under one construction contract; membership decides who sees its requests.
-import { pgTable, text, timestamp, uuid, integer, primaryKey, index } from 'drizzle-orm/pg-core';
+import { pgTable, text, timestamp, uuid, integer, primaryKey, index, boolean, jsonb } from 'drizzle-orm/pg-core';
+import { defaultDeskDueDays, type DeskDueDays } from '../../shared/workflow/desks';
 import { users } from './auth';
 
 export const projects = pgTable('projects', {
@@ -14,6 +15,10 @@ export const projects = pgTable('projects', {
   contractNumber: text('contract_number').notNull(),
   contractorFirm: text('contractor_firm').notNull(),
   section: text('section').notNull(),
+  // Federal-aid projects need the oversight agency's concurrence before a major change is decided.
+  federalAid: boolean('federal_aid').notNull().default(false),
+  // Days a request may wait at each desk before reminders go out.
+  deskDueDays: jsonb('desk_due_days').$type<DeskDueDays>().notNull().default(defaultDeskDueDays),
   // Next request sequence; incremented under the row lock of the filing transaction.
   nextRequestSeq: integer('next_request_seq').notNull().default(1),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),

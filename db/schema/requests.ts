@@ -1,5 +1,5 @@
-// Requests, their attachments, their trail and the mail they cause.
-import { pgTable, text, timestamp, uuid, integer, bigint, jsonb, bigserial, index, uniqueIndex } from 'drizzle-orm/pg-core';
+// Requests, their revisions, conditions, attachments, trail and the mail they cause.
+import { pgTable, text, timestamp, uuid, integer, bigint, jsonb, bigserial, boolean, index, uniqueIndex, primaryKey } from 'drizzle-orm/pg-core';
 import { users } from './auth';
 import { projects } from './projects';
 import { roles } from '../../shared/roles';
@@ -10,23 +10,71 @@ export const changeRequests = pgTable(
     id: uuid('id').primaryKey(),
     number: text('number').notNull().unique(),
     projectId: uuid('project_id').notNull().references(() => projects.id),
+    type: text('type').notNull(),
+    // Copied from the current revision so lists and search need no jsonb.
     title: text('title').notNull(),
-    reason: text('reason').notNull(),
     state: text('state').notNull(),
-    // Optimistic-concurrency counter: every accepted move increments it.
+    // Optimistic-concurrency counter: every accepted change increments it.
     version: integer('version').notNull().default(1),
+    currentRevision: integer('current_revision').notNull().default(1),
     filedById: text('filed_by_id').notNull().references(() => users.id),
+    assignedEorId: text('assigned_eor_id').references(() => users.id),
+    decision: text('decision', { enum: ['approved', 'approved_with_conditions', 'rejected'] }),
+    // null until central office classifies the change on a federal-aid project.
+    majorChange: boolean('major_change'),
+    federalConcurrenceAttachmentId: uuid('federal_concurrence_attachment_id'),
+    // The time of the trail event that put the request on its current desk.
+    deskSince: timestamp('desk_since', { withTimezone: true }).notNull().defaultNow(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('change_requests_project_idx').on(t.projectId), index('change_requests_state_idx').on(t.state)],
+  (t) => [
+    index('change_requests_project_idx').on(t.projectId),
+    index('change_requests_state_idx').on(t.state),
+    index('change_requests_desk_since_idx').on(t.deskSince, t.id),
+  ],
 );
+
+export const requestRevisions = pgTable(
+  'request_revisions',
+  {
+    requestId: uuid('request_id').notNull().references(() => changeRequests.id),
+    revision: integer('revision').notNull(),
+    // The typed request body (shared/requests/requestBody.ts), complete once submitted.
+    body: jsonb('body').notNull(),
+    // Inputs, results and module version of the engineering check computed at submit.
+    engineering: jsonb('engineering'),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    submittedAt: timestamp('submitted_at', { withTimezone: true }),
+  },
+  (t) => [primaryKey({ columns: [t.requestId, t.revision] })],
+);
+
+export const requestConditions = pgTable(
+  'request_conditions',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    requestId: uuid('request_id').notNull().references(() => changeRequests.id),
+    seq: integer('seq').notNull(),
+    text: text('text').notNull(),
+    dueBefore: text('due_before').notNull(),
+    satisfiedById: text('satisfied_by_id').references(() => users.id),
+    satisfiedAt: timestamp('satisfied_at', { withTimezone: true }),
+    note: text('note'),
+    evidenceAttachmentId: uuid('evidence_attachment_id'),
+  },
+  (t) => [uniqueIndex('request_conditions_seq_idx').on(t.requestId, t.seq)],
+);
+
+export const attachmentPurposes = ['revision', 'information_response', 'federal_concurrence', 'condition_evidence', 'decision_record'] as const;
 
 export const attachments = pgTable(
   'attachments',
   {
     id: uuid('id').primaryKey(),
     requestId: uuid('request_id').notNull().references(() => changeRequests.id),
+    revision: integer('revision').notNull(),
+    purpose: text('purpose', { enum: attachmentPurposes }).notNull().default('revision'),
     objectKey: text('object_key').notNull().unique(),
     // The uploader's file name, kept for display only; never part of a storage path.
     fileName: text('file_name').notNull(),
@@ -39,6 +87,7 @@ export const attachments = pgTable(
   (t) => [index('attachments_request_idx').on(t.requestId)],
 );
 
+// Append-only (a trigger refuses UPDATE, DELETE and TRUNCATE); each row's hash chains to the one before.
 export const trailEvents = pgTable(
   'trail_events',
   {
@@ -53,27 +102,42 @@ export const trailEvents = pgTable(
     actorRole: text('actor_role', { enum: roles }).notNull(),
     comment: text('comment'),
     payload: jsonb('payload').notNull().default({}),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull(),
+    prevHash: text('prev_hash').notNull(),
+    hash: text('hash').notNull(),
   },
   (t) => [uniqueIndex('trail_events_request_seq_idx').on(t.requestId, t.seq)],
 );
 
-// Mail is written in the same transaction as the move that causes it and sent afterwards,
-// so a move is never lost to a mail failure and no mail goes out for a move that rolled back.
+// One row per message: the record of what was sent, to whom, for which event. The delivery job
+// (graphile-worker) is queued in the same transaction and refers to this row by id.
 export const mailOutbox = pgTable(
   'mail_outbox',
   {
     id: uuid('id').primaryKey().defaultRandom(),
+    // One message per event and recipient, whatever retries or second workers do.
+    idempotencyKey: text('idempotency_key').notNull().unique(),
     toAddress: text('to_address').notNull(),
     subject: text('subject').notNull(),
     body: text('body').notNull(),
     requestId: uuid('request_id').references(() => changeRequests.id),
-    status: text('status', { enum: ['pending', 'sent', 'failed'] }).notNull().default('pending'),
+    status: text('status', { enum: ['pending', 'sent'] }).notNull().default('pending'),
     attempts: integer('attempts').notNull().default(0),
     lastError: text('last_error'),
-    nextAttemptAt: timestamp('next_attempt_at', { withTimezone: true }).notNull().defaultNow(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     sentAt: timestamp('sent_at', { withTimezone: true }),
   },
-  (t) => [index('mail_outbox_pending_idx').on(t.status, t.nextAttemptAt)],
+  (t) => [index('mail_outbox_request_idx').on(t.requestId)],
+);
+
+// Which overdue reminders went out: one per request, desk visit and overdue period.
+export const deskReminders = pgTable(
+  'desk_reminders',
+  {
+    requestId: uuid('request_id').notNull().references(() => changeRequests.id),
+    deskSince: timestamp('desk_since', { withTimezone: true }).notNull(),
+    period: integer('period').notNull(),
+    sentAt: timestamp('sent_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.requestId, t.deskSince, t.period] })],
 );

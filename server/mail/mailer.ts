@@ -2,7 +2,8 @@
 import nodemailer from 'nodemailer';
 import type { ServerEnv } from '../env';
 
-export type OutgoingMail = { to: string; subject: string; text: string };
+// messageId is derived from the message's idempotency key, so a receiver can spot a repeat.
+export type OutgoingMail = { to: string; subject: string; text: string; messageId?: string };
 
 export type Mailer = { send(mail: OutgoingMail): Promise<void>; isUp(): Promise<boolean>; close(): void };
 
@@ -17,7 +18,7 @@ export function createMailer(env: ServerEnv): Mailer {
   });
   return {
     async send(mail) {
-      await transport.sendMail({ from: env.MAIL_FROM, to: mail.to, subject: mail.subject, text: mail.text });
+      await transport.sendMail({ from: env.MAIL_FROM, to: mail.to, subject: mail.subject, text: mail.text, messageId: mail.messageId });
     },
     async isUp() {
       try {

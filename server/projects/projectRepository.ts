@@ -1,5 +1,5 @@
 import { and, eq, asc } from 'drizzle-orm';
-import type { Database } from '../../db/client';
+import type { Database, Transaction } from '../../db/client';
 import { projects, projectMembers } from '../../db/schema';
 import type { ProjectSummary } from '../../shared/requests/types';
 
@@ -11,6 +11,7 @@ const summaryColumns = {
   featureCarried: projects.featureCarried,
   featureCrossed: projects.featureCrossed,
   county: projects.county,
+  federalAid: projects.federalAid,
 };
 
 export async function projectsOfMember(db: Database, userId: string): Promise<ProjectSummary[]> {
@@ -22,7 +23,12 @@ export async function projectsOfMember(db: Database, userId: string): Promise<Pr
     .orderBy(asc(projects.code));
 }
 
-export async function isProjectMember(db: Database, projectId: string, userId: string): Promise<boolean> {
+export async function memberProjectIds(db: Database, userId: string): Promise<string[]> {
+  const rows = await db.select({ id: projectMembers.projectId }).from(projectMembers).where(eq(projectMembers.userId, userId));
+  return rows.map((r) => r.id);
+}
+
+export async function isProjectMember(db: Database | Transaction, projectId: string, userId: string): Promise<boolean> {
   const rows = await db
     .select({ projectId: projectMembers.projectId })
     .from(projectMembers)

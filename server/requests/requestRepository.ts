@@ -1,113 +1,200 @@
-// Database access for requests; services call these inside or outside a transaction.
-import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
+// Database access for requests. Writes run inside the service's transaction, under the request's
+// row lock taken by `lockRequest`.
+import { aliasedTable, and, asc, count, eq, gt, ilike, inArray, isNull, or, sql, type SQL } from 'drizzle-orm';
 import type { Database, Transaction } from '../../db/client';
-import { attachments, changeRequests, projectMembers, projects, trailEvents, users } from '../../db/schema';
-import type { AttachmentSummary, RequestDetail, RequestSummary, TrailEntry } from '../../shared/requests/types';
+import { attachments, changeRequests, projectMembers, projects, requestConditions, requestRevisions, trailEvents, users } from '../../db/schema';
+import type { RequestSummary } from '../../shared/requests/types';
 import type { Role } from '../../shared/roles';
 
 type Executor = Database | Transaction;
 
+const eorUsers = aliasedTable(users, 'eor_users');
+
 const summaryColumns = {
   id: changeRequests.id,
   number: changeRequests.number,
+  type: changeRequests.type,
   title: changeRequests.title,
   state: changeRequests.state,
   version: changeRequests.version,
+  currentRevision: changeRequests.currentRevision,
+  deskSince: changeRequests.deskSince,
   createdAt: changeRequests.createdAt,
   updatedAt: changeRequests.updatedAt,
   projectId: projects.id,
   projectCode: projects.code,
   projectName: projects.name,
   structureNumber: projects.structureNumber,
+  filedById: users.id,
   filedByName: users.name,
   filedByOrganization: users.organization,
+  eorId: eorUsers.id,
+  eorName: eorUsers.name,
+  eorOrganization: eorUsers.organization,
 };
-
-type SummaryRow = Awaited<ReturnType<ReturnType<typeof summaryQuery>['execute']>>[number];
-
-function toSummary(row: SummaryRow): RequestSummary {
-  return {
-    id: row.id,
-    number: row.number,
-    title: row.title,
-    state: row.state,
-    version: row.version,
-    project: { id: row.projectId, code: row.projectCode, name: row.projectName, structureNumber: row.structureNumber },
-    filedBy: { name: row.filedByName, organization: row.filedByOrganization },
-    createdAt: row.createdAt.toISOString(),
-    updatedAt: row.updatedAt.toISOString(),
-  };
-}
 
 function summaryQuery(db: Executor) {
   return db
     .select(summaryColumns)
     .from(changeRequests)
     .innerJoin(projects, eq(projects.id, changeRequests.projectId))
-    .innerJoin(users, eq(users.id, changeRequests.filedById));
-}
-
-// Requests of every project the user belongs to; `states` narrows to those at a given desk.
-export async function requestsVisibleTo(db: Database, userId: string, states?: readonly string[]): Promise<RequestSummary[]> {
-  const memberOf = db.select({ id: projectMembers.projectId }).from(projectMembers).where(eq(projectMembers.userId, userId));
-  const where = states
-    ? and(inArray(changeRequests.projectId, memberOf), inArray(changeRequests.state, [...states]))
-    : inArray(changeRequests.projectId, memberOf);
-  const rows = await summaryQuery(db).where(where).orderBy(desc(changeRequests.updatedAt)).limit(200);
-  return rows.map(toSummary);
-}
-
-export async function requestDetail(db: Database, id: string): Promise<RequestDetail | null> {
-  const [row] = await db
-    .select({ ...summaryColumns, reason: changeRequests.reason })
-    .from(changeRequests)
-    .innerJoin(projects, eq(projects.id, changeRequests.projectId))
     .innerJoin(users, eq(users.id, changeRequests.filedById))
-    .where(eq(changeRequests.id, id))
-    .limit(1);
-  if (!row) return null;
-  const files = await db
-    .select()
-    .from(attachments)
-    .where(eq(attachments.requestId, id))
-    .orderBy(asc(attachments.uploadedAt));
-  const trail = await db
-    .select({ event: trailEvents, actorName: users.name })
-    .from(trailEvents)
-    .innerJoin(users, eq(users.id, trailEvents.actorId))
-    .where(eq(trailEvents.requestId, id))
-    .orderBy(asc(trailEvents.seq));
+    .leftJoin(eorUsers, eq(eorUsers.id, changeRequests.assignedEorId));
+}
+
+type SummaryRow = {
+  id: string;
+  number: string;
+  type: string;
+  title: string;
+  state: string;
+  version: number;
+  currentRevision: number;
+  deskSince: Date;
+  createdAt: Date;
+  updatedAt: Date;
+  projectId: string;
+  projectCode: string;
+  projectName: string;
+  structureNumber: string;
+  filedById: string;
+  filedByName: string;
+  filedByOrganization: string | null;
+  eorId: string | null;
+  eorName: string | null;
+  eorOrganization: string | null;
+};
+
+function toSummary(row: SummaryRow): RequestSummary {
   return {
-    ...toSummary(row),
-    reason: row.reason,
-    attachments: files.map(
-      (f): AttachmentSummary => ({
-        id: f.id,
-        fileName: f.fileName,
-        contentType: f.contentType,
-        sizeBytes: f.sizeBytes,
-        sha256: f.sha256,
-        uploadedAt: f.uploadedAt.toISOString(),
-      }),
-    ),
-    trail: trail.map(
-      ({ event, actorName }): TrailEntry => ({
-        seq: event.seq,
-        eventType: event.eventType,
-        stateBefore: event.stateBefore,
-        stateAfter: event.stateAfter,
-        actorName,
-        actorRole: event.actorRole,
-        comment: event.comment,
-        at: event.createdAt.toISOString(),
-      }),
-    ),
+    id: row.id,
+    number: row.number,
+    type: row.type,
+    title: row.title,
+    state: row.state,
+    version: row.version,
+    currentRevision: row.currentRevision,
+    project: { id: row.projectId, code: row.projectCode, name: row.projectName, structureNumber: row.structureNumber },
+    filedBy: { id: row.filedById, name: row.filedByName, organization: row.filedByOrganization },
+    assignedEor: row.eorId ? { id: row.eorId, name: row.eorName ?? '', organization: row.eorOrganization } : null,
+    deskSince: row.deskSince.toISOString(),
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
   };
 }
 
-export async function projectIdOfRequest(db: Database, requestId: string): Promise<string | null> {
-  const [row] = await db.select({ projectId: changeRequests.projectId }).from(changeRequests).where(eq(changeRequests.id, requestId));
-  return row?.projectId ?? null;
+export type RequestFilter = {
+  // Projects the reader may see; undefined means every project (auditors).
+  projectIds?: string[];
+  states?: string[];
+  // Only requests routed to this engineer of record (their desk), when set.
+  assignedEorId?: string;
+  type?: string;
+  projectId?: string;
+  text?: string;
+  after?: { deskSince: Date; id: string };
+  limit: number;
+};
+
+// Longest-waiting first: the desk time ascending, id to break ties; the cursor is the last row's pair.
+export async function listRequests(db: Database, f: RequestFilter): Promise<RequestSummary[]> {
+  const where: (SQL | undefined)[] = [];
+  if (f.projectIds) where.push(f.projectIds.length ? inArray(changeRequests.projectId, f.projectIds) : sql`false`);
+  if (f.states) where.push(f.states.length ? inArray(changeRequests.state, f.states) : sql`false`);
+  if (f.assignedEorId) where.push(eq(changeRequests.assignedEorId, f.assignedEorId));
+  if (f.type) where.push(eq(changeRequests.type, f.type));
+  if (f.projectId) where.push(eq(changeRequests.projectId, f.projectId));
+  if (f.text) {
+    const like = `%${f.text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    where.push(or(ilike(changeRequests.title, like), ilike(changeRequests.number, like), ilike(projects.name, like), ilike(projects.structureNumber, like)));
+  }
+  if (f.after) {
+    where.push(or(gt(changeRequests.deskSince, f.after.deskSince), and(eq(changeRequests.deskSince, f.after.deskSince), gt(changeRequests.id, f.after.id))));
+  }
+  const rows = await summaryQuery(db)
+    .where(and(...where))
+    .orderBy(asc(changeRequests.deskSince), asc(changeRequests.id))
+    .limit(f.limit);
+  return rows.map(toSummary);
+}
+
+export async function requestSummary(db: Executor, id: string): Promise<RequestSummary | null> {
+  const [row] = await summaryQuery(db).where(eq(changeRequests.id, id)).limit(1);
+  return row ? toSummary(row) : null;
+}
+
+export async function lockRequest(tx: Transaction, id: string) {
+  const [row] = await tx
+    .select({ request: changeRequests, federalAid: projects.federalAid, projectName: projects.name, structureNumber: projects.structureNumber })
+    .from(changeRequests)
+    .innerJoin(projects, eq(projects.id, changeRequests.projectId))
+    .where(eq(changeRequests.id, id))
+    .for('update', { of: changeRequests });
+  return row ?? null;
+}
+
+export async function requestRow(db: Executor, id: string) {
+  const [row] = await db
+    .select({ request: changeRequests, federalAid: projects.federalAid, deskDueDays: projects.deskDueDays })
+    .from(changeRequests)
+    .innerJoin(projects, eq(projects.id, changeRequests.projectId))
+    .where(eq(changeRequests.id, id));
+  return row ?? null;
+}
+
+export async function openConditionCount(db: Executor, requestId: string): Promise<number> {
+  const [row] = await db
+    .select({ n: count() })
+    .from(requestConditions)
+    .where(and(eq(requestConditions.requestId, requestId), isNull(requestConditions.satisfiedAt)));
+  return row?.n ?? 0;
+}
+
+export async function revisionsOf(db: Executor, requestId: string) {
+  return db.select().from(requestRevisions).where(eq(requestRevisions.requestId, requestId)).orderBy(asc(requestRevisions.revision));
+}
+
+export async function currentRevisionRow(db: Executor, requestId: string, revision: number) {
+  const [row] = await db
+    .select()
+    .from(requestRevisions)
+    .where(and(eq(requestRevisions.requestId, requestId), eq(requestRevisions.revision, revision)));
+  return row ?? null;
+}
+
+export async function attachmentsOf(db: Executor, requestId: string) {
+  return db
+    .select({ attachment: attachments, uploaderName: users.name })
+    .from(attachments)
+    .innerJoin(users, eq(users.id, attachments.uploadedById))
+    .where(eq(attachments.requestId, requestId))
+    .orderBy(asc(attachments.uploadedAt));
+}
+
+export async function attachmentOfRequest(db: Executor, requestId: string, attachmentId: string) {
+  const [row] = await db
+    .select()
+    .from(attachments)
+    .where(and(eq(attachments.id, attachmentId), eq(attachments.requestId, requestId)));
+  return row ?? null;
+}
+
+export async function conditionsOf(db: Executor, requestId: string) {
+  return db
+    .select({ condition: requestConditions, satisfierName: users.name, satisfierOrganization: users.organization })
+    .from(requestConditions)
+    .leftJoin(users, eq(users.id, requestConditions.satisfiedById))
+    .where(eq(requestConditions.requestId, requestId))
+    .orderBy(asc(requestConditions.seq));
+}
+
+export async function trailOf(db: Executor, requestId: string) {
+  return db
+    .select({ event: trailEvents, actorName: users.name, actorOrganization: users.organization })
+    .from(trailEvents)
+    .innerJoin(users, eq(users.id, trailEvents.actorId))
+    .where(eq(trailEvents.requestId, requestId))
+    .orderBy(asc(trailEvents.seq));
 }
 
 export async function attachmentWithProject(db: Database, attachmentId: string) {
@@ -130,12 +217,18 @@ export async function takeRequestNumber(tx: Transaction, projectId: string): Pro
   return `${row.code}-${String(row.seq).padStart(3, '0')}`;
 }
 
-export async function membersWithRole(tx: Executor, projectId: string, role: Role) {
-  return tx
-    .select({ id: users.id, name: users.name, email: users.email })
+export async function membersWithRole(db: Executor, projectId: string, role: Role) {
+  return db
+    .select({ id: users.id, name: users.name, email: users.email, organization: users.organization })
     .from(users)
     .innerJoin(projectMembers, eq(projectMembers.userId, users.id))
-    .where(and(eq(projectMembers.projectId, projectId), eq(users.role, role)));
+    .where(and(eq(projectMembers.projectId, projectId), eq(users.role, role)))
+    .orderBy(asc(users.name));
+}
+
+export async function userById(db: Executor, id: string) {
+  const [row] = await db.select().from(users).where(eq(users.id, id));
+  return row ?? null;
 }
 
 export async function projectById(db: Executor, projectId: string) {

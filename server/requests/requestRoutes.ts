@@ -1,11 +1,22 @@
-// HTTP for requests: parse and validate here, decide in the service.
+// HTTP for requests: parse and validate here, decide in the services.
 import { Router } from 'express';
 import multer from 'multer';
 import { z } from 'zod';
-import { requestFilingFields, uploadLimits } from '../../shared/requests/filing';
+import type { Database } from '../../db/client';
+import { uploadLimits } from '../../shared/requests/filing';
+import { requestListQuerySchema } from '../../shared/requests/listQuery';
+import { requestDraftSchema } from '../../shared/requests/requestBody';
+import { workflowEventSchema } from '../../shared/workflow/events';
 import { actorOf } from '../auth/requireActor';
 import { HttpError, validationError } from '../http/errors';
-import type { IncomingFile, RequestService } from './requestService';
+import type { ObjectStore } from '../storage/objectStore';
+import { addComment, applyEvent } from '../workflow/workflowService';
+import { addAttachments, openAttachment, removeDraftAttachment, type IncomingFile } from './attachmentService';
+import { createDraft, updateDraft } from './draftService';
+import { detailFor, listFor, verifyFor } from './readService';
+import { membersWithRole } from './requestRepository';
+import { mayRead } from './access';
+import { requestRow } from './requestRepository';
 
 const idParam = z.uuid();
 
@@ -15,42 +26,94 @@ function parseId(value: unknown, what: string): string {
   return parsed.data;
 }
 
-export function requestRoutes(service: RequestService, opts: { maxFileBytes?: number } = {}): Router {
+function parseBody<T>(schema: z.ZodType<T>, body: unknown, message: string): T {
+  if (body === undefined || body === null || (typeof body === 'object' && Object.keys(body).length === 0)) {
+    throw new HttpError(400, 'empty_body', 'The request body is empty.');
+  }
+  const parsed = schema.safeParse(body);
+  if (!parsed.success) throw validationError(parsed.error, message);
+  return parsed.data;
+}
+
+const uploadPurpose = z.enum(['revision', 'information_response', 'federal_concurrence', 'condition_evidence']);
+const draftUpdate = z.object({ version: z.number().int().positive(), body: z.unknown() }).strict();
+const commentBody = z.strictObject({ comment: z.string().trim().min(1, 'Write the comment.').max(8000) });
+
+export function requestRoutes(deps: { db: Database; store: ObjectStore; publicUrl: string; maxFileBytes?: number }): Router {
+  const { db, store } = deps;
   const router = Router();
   const upload = multer({
     storage: multer.memoryStorage(),
-    limits: {
-      fileSize: opts.maxFileBytes ?? uploadLimits.maxFileBytes,
-      files: uploadLimits.maxFilesPerRequest,
-      fields: 20,
-      fieldSize: 64 * 1024,
-    },
-  });
-
-  router.post('/api/requests', upload.array('files', uploadLimits.maxFilesPerRequest), async (req, res) => {
-    const actor = actorOf(req);
-    const files = (req.files ?? []) as IncomingFile[];
-    const body: Record<string, unknown> = { ...(req.body ?? {}) };
-    if (Object.keys(body).length === 0 && files.length === 0) {
-      throw new HttpError(400, 'empty_body', 'The request is empty: send a project, a title and a reason.');
-    }
-    const fields = requestFilingFields.safeParse(body);
-    if (!fields.success) throw validationError(fields.error, 'The request was not filed; some fields need attention.');
-    const filed = await service.fileRequest(actor, fields.data, files);
-    res.status(201).json(filed);
+    limits: { fileSize: deps.maxFileBytes ?? uploadLimits.maxFileBytes, files: uploadLimits.maxFilesPerRequest, fields: 5, fieldSize: 1024 },
   });
 
   router.get('/api/requests', async (req, res) => {
-    const deskOnly = req.query.desk === 'mine';
-    res.json(await service.listFor(actorOf(req), deskOnly));
+    const query = requestListQuerySchema.safeParse(req.query);
+    if (!query.success) throw validationError(query.error, 'The list filters are not valid.');
+    res.json(await listFor(db, actorOf(req), query.data));
+  });
+
+  router.post('/api/requests', async (req, res) => {
+    const draft = parseBody(requestDraftSchema, req.body, 'The draft was not saved; some fields need attention.');
+    const id = await createDraft(db, actorOf(req), draft);
+    res.status(201).json(await detailFor(db, actorOf(req), id));
   });
 
   router.get('/api/requests/:id', async (req, res) => {
-    res.json(await service.readFor(actorOf(req), parseId(req.params.id, 'request')));
+    res.json(await detailFor(db, actorOf(req), parseId(req.params.id, 'request')));
+  });
+
+  router.put('/api/requests/:id/draft', async (req, res) => {
+    const id = parseId(req.params.id, 'request');
+    const { version, body } = parseBody(draftUpdate, req.body, 'Send the version you saw and the draft body.');
+    const draft = parseBody(requestDraftSchema, body, 'The draft was not saved; some fields need attention.');
+    await updateDraft(db, actorOf(req), id, version, draft);
+    res.json(await detailFor(db, actorOf(req), id));
+  });
+
+  router.post('/api/requests/:id/events', async (req, res) => {
+    const id = parseId(req.params.id, 'request');
+    const event = parseBody(workflowEventSchema, req.body, 'That move is not complete; see the fields named.');
+    await applyEvent(deps, actorOf(req), id, event);
+    res.json(await detailFor(db, actorOf(req), id));
+  });
+
+  router.post('/api/requests/:id/comments', async (req, res) => {
+    const id = parseId(req.params.id, 'request');
+    const { comment } = parseBody(commentBody, req.body, 'The comment was not saved.');
+    await addComment(db, actorOf(req), id, comment);
+    res.status(201).json(await detailFor(db, actorOf(req), id));
+  });
+
+  router.get('/api/requests/:id/trail/verify', async (req, res) => {
+    res.json(await verifyFor(db, actorOf(req), parseId(req.params.id, 'request')));
+  });
+
+  // The engineers of record central office may route this request to.
+  router.get('/api/requests/:id/engineers-of-record', async (req, res) => {
+    const id = parseId(req.params.id, 'request');
+    const row = await requestRow(db, id);
+    if (!row || !(await mayRead(db, actorOf(req), row.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+    res.json(await membersWithRole(db, row.request.projectId, 'engineer_of_record'));
+  });
+
+  router.post('/api/requests/:id/attachments', upload.array('files', uploadLimits.maxFilesPerRequest), async (req, res) => {
+    const id = parseId(req.params.id, 'request');
+    const purpose = uploadPurpose.safeParse(req.query.purpose ?? 'revision');
+    if (!purpose.success) throw new HttpError(400, 'invalid_input', 'Unknown kind of attachment.', { purpose: 'One of revision, information_response, federal_concurrence, condition_evidence.' });
+    const extraFields = Object.keys(req.body ?? {});
+    if (extraFields.length) throw new HttpError(400, 'invalid_input', 'Only files are accepted here.', Object.fromEntries(extraFields.map((f) => [f, 'This field is not accepted here.'])));
+    const files = (req.files ?? []) as IncomingFile[];
+    res.status(201).json(await addAttachments(deps, actorOf(req), id, purpose.data, files));
+  });
+
+  router.delete('/api/requests/:id/attachments/:attachmentId', async (req, res) => {
+    await removeDraftAttachment(deps, actorOf(req), parseId(req.params.id, 'request'), parseId(req.params.attachmentId, 'attachment'));
+    res.status(204).end();
   });
 
   router.get('/api/attachments/:id/content', async (req, res) => {
-    const { attachment, object } = await service.openAttachment(actorOf(req), parseId(req.params.id, 'attachment'));
+    const { attachment, object } = await openAttachment(deps, actorOf(req), parseId(req.params.id, 'attachment'));
     res.setHeader('content-type', attachment.contentType);
     res.setHeader('content-length', String(attachment.sizeBytes));
     res.setHeader('content-disposition', `inline; filename*=UTF-8''${encodeURIComponent(attachment.fileName)}`);

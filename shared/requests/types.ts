@@ -1,12 +1,19 @@
 // Shapes the API returns for requests; the client renders them, the server builds them.
 import type { Role } from '../roles';
+import type { MachineEventType, WorkflowFacts } from '../workflow/rules';
+import type { RequestDraft } from './requestBody';
+
+export type PersonRef = { id: string; name: string; organization: string | null };
 
 export type AttachmentSummary = {
   id: string;
+  revision: number;
+  purpose: string;
   fileName: string;
   contentType: string;
   sizeBytes: number;
   sha256: string;
+  uploadedBy: string;
   uploadedAt: string;
 };
 
@@ -15,28 +22,64 @@ export type TrailEntry = {
   eventType: string;
   stateBefore: string | null;
   stateAfter: string;
-  actorName: string;
+  actor: PersonRef;
   actorRole: Role;
   comment: string | null;
+  payload: Record<string, unknown>;
   at: string;
+  hash: string;
+};
+
+export type RevisionChange = { path: string; before: unknown; after: unknown };
+
+export type RevisionView = {
+  revision: number;
+  body: RequestDraft;
+  engineering: unknown;
+  createdAt: string;
+  submittedAt: string | null;
+  // What differs from the revision before it; empty for the first.
+  changes: RevisionChange[];
+};
+
+export type ConditionView = {
+  id: string;
+  seq: number;
+  text: string;
+  dueBefore: string;
+  satisfied: boolean;
+  satisfiedBy: PersonRef | null;
+  satisfiedAt: string | null;
+  note: string | null;
+  evidenceAttachmentId: string | null;
 };
 
 export type RequestSummary = {
   id: string;
   number: string;
+  type: string;
   title: string;
   state: string;
   version: number;
+  currentRevision: number;
   project: { id: string; code: string; name: string; structureNumber: string };
-  filedBy: { name: string; organization: string | null };
+  filedBy: PersonRef;
+  assignedEor: PersonRef | null;
+  deskSince: string;
   createdAt: string;
   updatedAt: string;
 };
 
+export type RequestPage = { items: RequestSummary[]; nextCursor: string | null };
+
 export type RequestDetail = RequestSummary & {
-  reason: string;
+  decision: string | null;
+  facts: WorkflowFacts;
+  revisions: RevisionView[];
   attachments: AttachmentSummary[];
+  conditions: ConditionView[];
   trail: TrailEntry[];
+  availableActions: MachineEventType[];
 };
 
 export type ProjectSummary = {
@@ -47,6 +90,7 @@ export type ProjectSummary = {
   featureCarried: string;
   featureCrossed: string;
   county: string;
+  federalAid: boolean;
 };
 
 export type Actor = { id: string; name: string; email: string; role: Role; organization: string | null };

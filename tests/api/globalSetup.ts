@@ -7,7 +7,7 @@ import { suitePorts } from '../support/testSettings';
 export default async function setup() {
   const stopFakes = await startSuiteFakes('api');
   const { db, pool } = createDatabase(suitePorts('api').databaseUrl, 2);
-  await runMigrations(db);
+  await runMigrations(db, pool);
   await pool.end();
   return stopFakes;
 }

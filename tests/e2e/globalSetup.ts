@@ -12,7 +12,7 @@ export default async function setup() {
   const stopFakes = await startSuiteFakes('e2e');
   const env = testServerEnv('e2e');
   const { db, pool } = createDatabase(env.DATABASE_URL, 2);
-  await runMigrations(db);
+  await runMigrations(db, pool);
   await seedDemo(db);
   await pool.end();
 

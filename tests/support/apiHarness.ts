@@ -1,4 +1,5 @@
 // Builds the real Express app against the test database and fakes, plus fixtures and sign-in.
+import { S3Client } from '@aws-sdk/client-s3';
 import request from 'supertest';
 import { randomUUID } from 'node:crypto';
 import { setTimeout as sleep } from 'node:timers/promises';
@@ -8,10 +9,11 @@ import { createApp } from '../../server/app';
 import { createAuth } from '../../server/auth/auth';
 import type { ServerEnv } from '../../server/env';
 import { createMailer } from '../../server/mail/mailer';
-import { createOutboxDispatcher } from '../../server/mail/outbox';
+import { startBackgroundJobs } from '../../server/jobs';
+import type { Runner } from 'graphile-worker';
 import { upsertAccount } from '../../server/people/accountRepository';
 import { createObjectStore } from '../../server/storage/objectStore';
-import type { Role } from '../../shared/roles';
+import { roles, type Role } from '../../shared/roles';
 import { testServerEnv } from './testSettings';
 
 export const testPassword = 'test-password-123';
@@ -21,15 +23,26 @@ export function buildTestApp(overrides: Partial<Record<keyof ServerEnv, string>>
   const { db, pool } = createDatabase(env.DATABASE_URL, 5);
   const store = createObjectStore(env);
   const mailer = createMailer(env);
-  const outbox = createOutboxDispatcher(db, mailer);
-  const app = createApp({ env, db, auth: createAuth(db, env), store, mailer, onMailQueued: () => void outbox.kick() });
+  const app = createApp({ env, db, auth: createAuth(db, env), store, mailer });
+  let runner: Runner | null = null;
   return {
     env,
     db,
+    pool,
     app,
     store,
-    outbox,
+    // The job worker (mail, reminders) only where a test wants delivery: a worker with a broken
+    // SMTP setting would otherwise pick up and delay other tests' mail.
+    startJobs: async () => {
+      runner ??= await startBackgroundJobs({ pool, db, mailer, publicUrl: env.PUBLIC_URL, pollIntervalMs: 200 });
+      return runner;
+    },
+    stopJobs: async () => {
+      await runner?.stop();
+      runner = null;
+    },
     close: async () => {
+      await runner?.stop();
       mailer.close();
       await pool.end();
     },
@@ -81,13 +94,25 @@ export async function createScenario(db: Database) {
     return { id, email, name };
   }
 
+  // One person per role on the project, the same roles again on the other project (non-members
+  // of the first), and a second engineer of record on the project for reassignment.
+  const members = {} as Record<Role, Person>;
+  const outsiders = {} as Record<Role, Person>;
+  for (const role of roles) {
+    members[role] = await person(role, `${role.replace(/_/g, '-')}`, project.id);
+    outsiders[role] = await person(role, `outside-${role.replace(/_/g, '-')}`, otherProject.id);
+  }
+  const secondEor = await person('engineer_of_record', 'second-eor', project.id);
   return {
     project,
     otherProject,
-    contractor: await person('contractor', 'contractor', project.id),
-    sectionEngineer: await person('section_engineer', 'section-engineer', project.id),
-    fieldInspector: await person('field_inspector', 'field-inspector', project.id),
-    outsider: await person('contractor', 'outsider', otherProject.id),
+    members,
+    outsiders,
+    secondEor,
+    contractor: members.contractor,
+    sectionEngineer: members.section_engineer,
+    fieldInspector: members.field_inspector,
+    outsider: outsiders.contractor,
   };
 }
 
@@ -110,4 +135,13 @@ export async function waitForMail(env: ServerEnv, to: string, timeoutMs = 10_000
     await sleep(100);
   }
   return [];
+}
+
+export function s3ClientFor(env: ServerEnv) {
+  return new S3Client({
+    endpoint: env.S3_ENDPOINT,
+    region: env.S3_REGION,
+    forcePathStyle: true,
+    credentials: { accessKeyId: env.S3_ACCESS_KEY_ID, secretAccessKey: env.S3_SECRET_ACCESS_KEY },
+  });
 }

@@ -1,0 +1,117 @@
+// Files on a request: who may add which kind, in which state. Objects are stored first; the rows
+// are written in one transaction after, and the objects removed again if that fails.
+import { createHash, randomUUID } from 'node:crypto';
+import { eq } from 'drizzle-orm';
+import type { Database } from '../../db/client';
+import { attachments, attachmentPurposes } from '../../db/schema';
+import type { Actor, AttachmentSummary } from '../../shared/requests/types';
+import type { Role } from '../../shared/roles';
+import { HttpError } from '../http/errors';
+import { isProjectMember } from '../projects/projectRepository';
+import type { ObjectStore } from '../storage/objectStore';
+import { mayRead } from './access';
+import { attachmentOfRequest, attachmentWithProject, requestRow } from './requestRepository';
+
+export type IncomingFile = { originalname: string; mimetype: string; size: number; buffer: Buffer };
+export type AttachmentPurpose = (typeof attachmentPurposes)[number];
+
+const uploadRules: Record<Exclude<AttachmentPurpose, 'decision_record'>, { role: Role; states: string[]; what: string }> = {
+  revision: { role: 'contractor', states: ['drafting', 'revising'], what: 'Drawings and documents are added by the contractor while the request is a draft or returned for revision.' },
+  information_response: { role: 'contractor', states: ['information_requested'], what: 'Answers to a question are attached by the contractor while the question is open.' },
+  federal_concurrence: { role: 'central_office', states: ['central_routing', 'eor_review'], what: 'The federal concurrence letter is attached by central office before the decision.' },
+  condition_evidence: { role: 'field_inspector', states: ['conditions_open'], what: 'Evidence is attached by the field inspector while conditions are open.' },
+};
+
+export function objectKeyFor(projectId: string, requestId: string, revision: number): string {
+  return `projects/${projectId}/requests/${requestId}/rev-${revision}/${randomUUID()}`;
+}
+
+export async function addAttachments(
+  deps: { db: Database; store: ObjectStore },
+  actor: Actor,
+  requestId: string,
+  purpose: Exclude<AttachmentPurpose, 'decision_record'>,
+  files: IncomingFile[],
+): Promise<AttachmentSummary[]> {
+  const { db, store } = deps;
+  const row = await requestRow(db, requestId);
+  if (!row || !(await mayRead(db, actor, row.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+  const rule = uploadRules[purpose];
+  if (actor.role !== rule.role || !(await isProjectMember(db, row.request.projectId, actor.id))) throw new HttpError(403, 'not_your_upload', rule.what);
+  if (!rule.states.includes(row.request.state)) throw new HttpError(409, 'not_now', rule.what);
+  if (files.length === 0) throw new HttpError(400, 'no_files', 'Choose at least one file to upload.');
+  for (const f of files) if (f.size === 0) throw new HttpError(400, 'empty_file', `"${f.originalname}" is empty.`);
+
+  const revision = row.request.currentRevision;
+  const stored: { key: string; file: IncomingFile; sha256: string }[] = [];
+  try {
+    for (const file of files) {
+      const key = objectKeyFor(row.request.projectId, requestId, revision);
+      const sha256 = createHash('sha256').update(file.buffer).digest('hex');
+      await store.put(key, file.buffer, file.mimetype, { 'original-name': file.originalname, sha256 });
+      stored.push({ key, file, sha256 });
+    }
+  } catch (err) {
+    await Promise.allSettled(stored.map((s) => store.remove(s.key)));
+    console.error('[spanrelay] object store refused an upload', err);
+    throw new HttpError(503, 'storage_unavailable', 'File storage is not reachable right now; nothing was saved. Try again shortly.');
+  }
+  try {
+    const rows = await db
+      .insert(attachments)
+      .values(
+        stored.map((s) => ({
+          id: randomUUID(),
+          requestId,
+          revision,
+          purpose,
+          objectKey: s.key,
+          fileName: s.file.originalname,
+          contentType: s.file.mimetype,
+          sizeBytes: s.file.size,
+          sha256: s.sha256,
+          uploadedById: actor.id,
+        })),
+      )
+      .returning();
+    return rows.map((a) => ({
+      id: a.id,
+      revision: a.revision,
+      purpose: a.purpose,
+      fileName: a.fileName,
+      contentType: a.contentType,
+      sizeBytes: a.sizeBytes,
+      sha256: a.sha256,
+      uploadedBy: actor.name,
+      uploadedAt: a.uploadedAt.toISOString(),
+    }));
+  } catch (err) {
+    await Promise.allSettled(stored.map((s) => store.remove(s.key)));
+    throw err;
+  }
+}
+
+// Only a draft's own files can be removed; a submitted revision's are part of the record.
+export async function removeDraftAttachment(deps: { db: Database; store: ObjectStore }, actor: Actor, requestId: string, attachmentId: string) {
+  const row = await requestRow(deps.db, requestId);
+  if (!row || !(await mayRead(deps.db, actor, row.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+  const a = await attachmentOfRequest(deps.db, requestId, attachmentId);
+  if (!a) throw new HttpError(404, 'attachment_not_found', 'No attachment of this request has that id.');
+  if (actor.role !== 'contractor' || !(await isProjectMember(deps.db, row.request.projectId, actor.id))) {
+    throw new HttpError(403, 'not_your_upload', 'Only the contractor removes files from a draft.');
+  }
+  const draftFile = a.purpose === 'revision' && a.revision === row.request.currentRevision && ['drafting', 'revising'].includes(row.request.state);
+  if (!draftFile) throw new HttpError(409, 'attachment_on_record', 'This file belongs to a submitted revision and stays on the record.');
+  await deps.db.delete(attachments).where(eq(attachments.id, attachmentId));
+  await deps.store.remove(a.objectKey).catch(() => undefined);
+}
+
+export async function openAttachment(deps: { db: Database; store: ObjectStore }, actor: Actor, attachmentId: string) {
+  const row = await attachmentWithProject(deps.db, attachmentId);
+  if (!row || !(await mayRead(deps.db, actor, row.projectId))) throw new HttpError(404, 'attachment_not_found', 'No attachment you can see has that id.');
+  try {
+    return { attachment: row.attachment, object: await deps.store.get(row.attachment.objectKey) };
+  } catch {
+    throw new HttpError(503, 'storage_unavailable', 'File storage is not reachable right now. Try again shortly.');
+  }
+}

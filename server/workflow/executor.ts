@@ -1,0 +1,3 @@
+import type { Database, Transaction } from '../../db/client';
+
+export type Executor = Database | Transaction;
