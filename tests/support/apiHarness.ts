@@ -54,7 +54,7 @@ export type TestApp = ReturnType<typeof buildTestApp>;
 type Person = { id: string; email: string; name: string };
 
 // A project of its own per test file, so parallel files never see each other's rows.
-export async function createScenario(db: Database) {
+export async function createScenario(db: Database, options: { federalAid?: boolean } = {}) {
   const tag = randomUUID().slice(0, 8);
   const [project] = await db
     .insert(projects)
@@ -68,6 +68,7 @@ export async function createScenario(db: Database) {
       contractNumber: `TC-${tag}`,
       contractorFirm: 'Test Builders',
       section: 'Test Section',
+      federalAid: options.federalAid ?? false,
     })
     .returning();
   const [otherProject] = await db
