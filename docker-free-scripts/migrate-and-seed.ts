@@ -9,7 +9,7 @@ async function main() {
   const { db, pool } = createDatabase(url, 2);
   try {
     await runMigrations(db, pool);
-    await seedDemo(db);
+    await seedDemo(db, process.env.PUBLIC_URL);
   } finally {
     await pool.end();
   }

@@ -4,6 +4,8 @@ import type { Database } from '../../db/client';
 import { projectMembers, projects } from '../../db/schema';
 import type { Role } from '../../shared/roles';
 import { upsertAccount } from '../people/accountRepository';
+import type { Actor } from '../../shared/requests/types';
+import { seedDemoRequests } from './demoRequests';
 
 export const demoPassword = 'spanrelay-demo';
 export const demoEmail = (role: Role) => `${role}@demo.spanrelay.test`;
@@ -32,8 +34,9 @@ export const demoProject = {
   section: 'Tallis Section',
 };
 
-// Idempotent: running it again updates the same people and project instead of duplicating them.
-export async function seedDemo(db: Database): Promise<{ projectId: string; userIds: Record<Role, string> }> {
+// Idempotent: running it again updates the same people and project instead of duplicating them,
+// and adds the demo requests only to a project that has none.
+export async function seedDemo(db: Database, publicUrl = 'http://127.0.0.1:8081'): Promise<{ projectId: string; userIds: Record<Role, string> }> {
   const userIds = {} as Record<Role, string>;
   for (const person of demoPeople) {
     userIds[person.role] = await upsertAccount(db, { ...person, email: demoEmail(person.role), password: demoPassword });
@@ -48,5 +51,9 @@ export async function seedDemo(db: Database): Promise<{ projectId: string; userI
     .insert(projectMembers)
     .values(Object.values(userIds).map((userId) => ({ projectId: project.id, userId })))
     .onConflictDoNothing();
+  const people = Object.fromEntries(
+    demoPeople.map((p) => [p.role, { id: userIds[p.role], name: p.name, email: demoEmail(p.role), role: p.role, organization: p.organization }]),
+  ) as Record<Role, Actor>;
+  await seedDemoRequests(db, project.id, people, publicUrl);
   return { projectId: project.id, userIds };
 }

@@ -13,7 +13,7 @@ export default async function setup() {
   const env = testServerEnv('e2e');
   const { db, pool } = createDatabase(env.DATABASE_URL, 2);
   await runMigrations(db, pool);
-  await seedDemo(db);
+  await seedDemo(db, env.PUBLIC_URL);
   await pool.end();
 
   if (!process.env.WEB_DIST) throw new Error('WEB_DIST is not set: the test command exports the web app first');
