@@ -12,6 +12,9 @@ export function createMailer(env: ServerEnv): Mailer {
     host: env.SMTP_HOST,
     port: env.SMTP_PORT,
     secure: false,
+    // One connection reused for a burst of notifications instead of one per message.
+    pool: true,
+    maxConnections: 2,
     ignoreTLS: env.NODE_ENV !== 'production',
     connectionTimeout: 3000,
     greetingTimeout: 3000,

@@ -1,7 +1,7 @@
 // Files on a request: who may add which kind, in which state. Objects are stored first; the rows
 // are written in one transaction after, and the objects removed again if that fails.
-import { createHash, randomUUID } from 'node:crypto';
-import { eq } from 'drizzle-orm';
+import { randomUUID } from 'node:crypto';
+import { eq, sum } from 'drizzle-orm';
 import type { Database } from '../../db/client';
 import { attachments, attachmentPurposes } from '../../db/schema';
 import type { Actor, AttachmentSummary } from '../../shared/requests/types';
@@ -9,13 +9,15 @@ import type { Role } from '../../shared/roles';
 import { HttpError } from '../http/errors';
 import { isProjectMember } from '../projects/projectRepository';
 import type { ObjectStore } from '../storage/objectStore';
+import type { StoredUpload } from '../storage/streamingUploadStorage';
 import { mayRead } from './access';
 import { attachmentOfRequest, attachmentWithProject, requestRow } from './requestRepository';
 
-export type IncomingFile = { originalname: string; mimetype: string; size: number; buffer: Buffer };
 export type AttachmentPurpose = (typeof attachmentPurposes)[number];
+export type UploadPurpose = Exclude<AttachmentPurpose, 'decision_record'>;
+export type ReceivedFile = StoredUpload & { originalname: string };
 
-const uploadRules: Record<Exclude<AttachmentPurpose, 'decision_record'>, { role: Role; states: string[]; what: string }> = {
+const uploadRules: Record<UploadPurpose, { role: Role; states: string[]; what: string }> = {
   revision: { role: 'contractor', states: ['drafting', 'revising'], what: 'Drawings and documents are added by the contractor while the request is a draft or returned for revision.' },
   information_response: { role: 'contractor', states: ['information_requested'], what: 'Answers to a question are attached by the contractor while the question is open.' },
   federal_concurrence: { role: 'central_office', states: ['central_routing', 'eor_review'], what: 'The federal concurrence letter is attached by central office before the decision.' },
@@ -26,54 +28,48 @@ export function objectKeyFor(projectId: string, requestId: string, revision: num
   return `projects/${projectId}/requests/${requestId}/rev-${revision}/${randomUUID()}`;
 }
 
-export async function addAttachments(
-  deps: { db: Database; store: ObjectStore },
-  actor: Actor,
-  requestId: string,
-  purpose: Exclude<AttachmentPurpose, 'decision_record'>,
-  files: IncomingFile[],
-): Promise<AttachmentSummary[]> {
-  const { db, store } = deps;
+// Decided before a byte is read: may this person add this kind of file to this request now?
+export async function authorizeUpload(db: Database, actor: Actor, requestId: string, purpose: UploadPurpose) {
   const row = await requestRow(db, requestId);
   if (!row || !(await mayRead(db, actor, row.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
   const rule = uploadRules[purpose];
   if (actor.role !== rule.role || !(await isProjectMember(db, row.request.projectId, actor.id))) throw new HttpError(403, 'not_your_upload', rule.what);
   if (!rule.states.includes(row.request.state)) throw new HttpError(409, 'not_now', rule.what);
-  if (files.length === 0) throw new HttpError(400, 'no_files', 'Choose at least one file to upload.');
-  for (const f of files) if (f.size === 0) throw new HttpError(400, 'empty_file', `"${f.originalname}" is empty.`);
+  const [held] = await db.select({ bytes: sum(attachments.sizeBytes) }).from(attachments).where(eq(attachments.requestId, requestId));
+  return { projectId: row.request.projectId, revision: row.request.currentRevision, usedBytes: Number(held?.bytes ?? 0) };
+}
 
-  const revision = row.request.currentRevision;
-  const stored: { key: string; file: IncomingFile; sha256: string }[] = [];
+// The objects are already stored; the rows go in together, or the objects are removed again.
+export async function recordUploads(
+  deps: { db: Database; store: ObjectStore },
+  actor: Actor,
+  requestId: string,
+  revision: number,
+  purpose: UploadPurpose,
+  files: ReceivedFile[],
+): Promise<AttachmentSummary[]> {
+  const removeAll = () => Promise.allSettled(files.map((f) => deps.store.remove(f.key)));
+  if (files.length === 0) throw new HttpError(400, 'no_files', 'Choose at least one file to upload.');
   try {
-    for (const file of files) {
-      const key = objectKeyFor(row.request.projectId, requestId, revision);
-      const sha256 = createHash('sha256').update(file.buffer).digest('hex');
-      await store.put(key, file.buffer, file.mimetype, { 'original-name': file.originalname, sha256 });
-      stored.push({ key, file, sha256 });
-    }
-  } catch (err) {
-    await Promise.allSettled(stored.map((s) => store.remove(s.key)));
-    console.error('[spanrelay] object store refused an upload', err);
-    throw new HttpError(503, 'storage_unavailable', 'File storage is not reachable right now; nothing was saved. Try again shortly.');
-  }
-  try {
-    const rows = await db
-      .insert(attachments)
-      .values(
-        stored.map((s) => ({
-          id: randomUUID(),
-          requestId,
-          revision,
-          purpose,
-          objectKey: s.key,
-          fileName: s.file.originalname,
-          contentType: s.file.mimetype,
-          sizeBytes: s.file.size,
-          sha256: s.sha256,
-          uploadedById: actor.id,
-        })),
-      )
-      .returning();
+    const rows = await deps.db.transaction(async (tx) =>
+      tx
+        .insert(attachments)
+        .values(
+          files.map((f) => ({
+            id: randomUUID(),
+            requestId,
+            revision,
+            purpose,
+            objectKey: f.key,
+            fileName: f.originalname,
+            contentType: f.detectedType,
+            sizeBytes: f.size,
+            sha256: f.sha256,
+            uploadedById: actor.id,
+          })),
+        )
+        .returning(),
+    );
     return rows.map((a) => ({
       id: a.id,
       revision: a.revision,
@@ -86,7 +82,7 @@ export async function addAttachments(
       uploadedAt: a.uploadedAt.toISOString(),
     }));
   } catch (err) {
-    await Promise.allSettled(stored.map((s) => store.remove(s.key)));
+    await removeAll();
     throw err;
   }
 }

@@ -11,7 +11,8 @@ import { actorOf } from '../auth/requireActor';
 import { HttpError, validationError } from '../http/errors';
 import type { ObjectStore } from '../storage/objectStore';
 import { addComment, applyEvent } from '../workflow/workflowService';
-import { addAttachments, openAttachment, removeDraftAttachment, type IncomingFile } from './attachmentService';
+import { authorizeUpload, objectKeyFor, openAttachment, recordUploads, removeDraftAttachment, type ReceivedFile } from './attachmentService';
+import { setUploadTarget, streamingUploadStorage } from '../storage/streamingUploadStorage';
 import { createDraft, updateDraft } from './draftService';
 import { detailFor, listFor, verifyFor } from './readService';
 import { membersWithRole } from './requestRepository';
@@ -43,7 +44,7 @@ export function requestRoutes(deps: { db: Database; store: ObjectStore; publicUr
   const { db, store } = deps;
   const router = Router();
   const upload = multer({
-    storage: multer.memoryStorage(),
+    storage: streamingUploadStorage(store),
     limits: { fileSize: deps.maxFileBytes ?? uploadLimits.maxFileBytes, files: uploadLimits.maxFilesPerRequest, fields: 5, fieldSize: 1024 },
   });
 
@@ -97,15 +98,35 @@ export function requestRoutes(deps: { db: Database; store: ObjectStore; publicUr
     res.json(await membersWithRole(db, row.request.projectId, 'engineer_of_record'));
   });
 
-  router.post('/api/requests/:id/attachments', upload.array('files', uploadLimits.maxFilesPerRequest), async (req, res) => {
-    const id = parseId(req.params.id, 'request');
-    const purpose = uploadPurpose.safeParse(req.query.purpose ?? 'revision');
-    if (!purpose.success) throw new HttpError(400, 'invalid_input', 'Unknown kind of attachment.', { purpose: 'One of revision, information_response, federal_concurrence, condition_evidence.' });
-    const extraFields = Object.keys(req.body ?? {});
-    if (extraFields.length) throw new HttpError(400, 'invalid_input', 'Only files are accepted here.', Object.fromEntries(extraFields.map((f) => [f, 'This field is not accepted here.'])));
-    const files = (req.files ?? []) as IncomingFile[];
-    res.status(201).json(await addAttachments(deps, actorOf(req), id, purpose.data, files));
-  });
+  // Authorise first, so nothing is read from a caller who may not upload here; then stream.
+  router.post(
+    '/api/requests/:id/attachments',
+    async (req, res, next) => {
+      const id = parseId(req.params.id, 'request');
+      const purpose = uploadPurpose.safeParse(req.query.purpose ?? 'revision');
+      if (!purpose.success) throw new HttpError(400, 'invalid_input', 'Unknown kind of attachment.', { purpose: 'One of revision, information_response, federal_concurrence, condition_evidence.' });
+      if (!req.is('multipart/form-data')) throw new HttpError(400, 'no_files', 'Send the files as multipart/form-data in the "files" field.');
+      const target = await authorizeUpload(db, actorOf(req), id, purpose.data);
+      res.locals.upload = { id, purpose: purpose.data, revision: target.revision };
+      setUploadTarget(req, {
+        keyFor: () => objectKeyFor(target.projectId, id, target.revision),
+        usedBytes: target.usedBytes,
+        maxTotalBytes: uploadLimits.maxRequestTotalBytes,
+      });
+      next();
+    },
+    upload.array('files', uploadLimits.maxFilesPerRequest),
+    async (req, res) => {
+      const { id, purpose, revision } = res.locals.upload as { id: string; purpose: z.infer<typeof uploadPurpose>; revision: number };
+      const files = (req.files ?? []) as unknown as ReceivedFile[];
+      const extraFields = Object.keys(req.body ?? {});
+      if (extraFields.length) {
+        await Promise.allSettled(files.map((f) => store.remove(f.key)));
+        throw new HttpError(400, 'invalid_input', 'Only files are accepted here.', Object.fromEntries(extraFields.map((f) => [f, 'This field is not accepted here.'])));
+      }
+      res.status(201).json(await recordUploads(deps, actorOf(req), id, revision, purpose, files));
+    },
+  );
 
   router.delete('/api/requests/:id/attachments/:attachmentId', async (req, res) => {
     await removeDraftAttachment(deps, actorOf(req), parseId(req.params.id, 'request'), parseId(req.params.attachmentId, 'attachment'));

@@ -12,7 +12,11 @@ import type { ServerEnv } from '../env';
 
 export type StoredObject = { body: Readable; contentType: string; contentLength: number };
 
+export type StreamingUpload = { done(): Promise<void>; abort(): Promise<void> };
+
 export type ObjectStore = {
+  // Multipart through lib-storage: parts go out as the stream arrives, nothing is held whole.
+  startUpload(key: string, body: Readable, contentType: string, metadata: Record<string, string>): StreamingUpload;
   put(key: string, body: Buffer | Readable, contentType: string, metadata: Record<string, string>): Promise<void>;
   get(key: string): Promise<StoredObject>;
   remove(key: string): Promise<void>;
@@ -32,10 +36,21 @@ export function createObjectStore(env: ServerEnv): ObjectStore {
   });
   const Bucket = env.S3_BUCKET;
 
+  // S3 metadata travels as HTTP headers, so non-ASCII names are percent-encoded.
+  const headerSafe = (metadata: Record<string, string>) => Object.fromEntries(Object.entries(metadata).map(([k, v]) => [k, encodeURIComponent(v)]));
+
   return {
+    startUpload(key, body, contentType, metadata) {
+      const upload = new Upload({
+        client,
+        params: { Bucket, Key: key, Body: body, ContentType: contentType, Metadata: headerSafe(metadata) },
+        partSize: 8 * 1024 * 1024,
+        queueSize: 2,
+      });
+      return { done: async () => void (await upload.done()), abort: () => upload.abort() };
+    },
     async put(key, body, contentType, metadata) {
-      // S3 metadata travels as HTTP headers, so non-ASCII names are percent-encoded.
-      const Metadata = Object.fromEntries(Object.entries(metadata).map(([k, v]) => [k, encodeURIComponent(v)]));
+      const Metadata = headerSafe(metadata);
       if (Buffer.isBuffer(body)) {
         await client.send(new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType, Metadata }));
       } else {

@@ -7,14 +7,16 @@ import { attachments, changeRequests, requestRevisions } from '../../db/schema';
 import { uploadLimits } from '../../shared/requests/filing';
 import { buildTestApp, createScenario, s3ClientFor, signIn, waitForMail, type TestApp } from '../support/apiHarness';
 import { otherDeviationBody } from '../support/requestFixtures';
+import { pdfOfSize, samplePdf } from '../support/sampleFiles';
 
-const drawing = Buffer.from('%PDF-1.4\n% marked-up plan sheet S-12, drain outlet moved 18 in\n%%EOF\n');
+let drawing: Buffer;
 const sha256 = (b: Buffer) => createHash('sha256').update(b).digest('hex');
 
 describe('filing a request', () => {
   let t: TestApp;
   let s: Awaited<ReturnType<typeof createScenario>>;
   beforeAll(async () => {
+    drawing = await samplePdf('Sheet S-12: drain outlet moved 18 in');
     t = buildTestApp();
     await t.startJobs();
     s = await createScenario(t.db);
@@ -136,7 +138,7 @@ describe('filing a request', () => {
       expect((await engineer.post('/api/requests').send({ type: 'other_deviation', projectId: s.project.id })).status).toBe(403);
     });
     it('a file over the size limit gets 413', async () => {
-      const tooBig = Buffer.alloc(uploadLimits.maxFileBytes + 1, 0x20);
+      const tooBig = pdfOfSize(uploadLimits.maxFileBytes + 1);
       expect((await expectRefused((a) => a.post(`/api/requests/${draftId}/attachments`).attach('files', tooBig, 'plans.pdf'), 413)).code).toBe('limit_file_size');
     });
     it('an empty file gets 400', async () => {

@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { trailEvents } from '../../db/schema';
 import { buildTestApp, createScenario, waitForMail, type TestApp } from '../support/apiHarness';
 import { agentsFor, deckPlacementBody, proposedConditions, requestAt } from '../support/requestFixtures';
+import { samplePdf, samplePhoto } from '../support/sampleFiles';
 
 describe('a request through every desk', () => {
   let t: TestApp;
@@ -57,7 +58,7 @@ describe('a request through every desk', () => {
     expect(r.conditions.map((c: { text: string }) => c.text)).toEqual(proposedConditions.map((c) => c.text));
 
     for (const condition of r.conditions) {
-      const evidence = await a.field_inspector.post(`/api/requests/${id}/attachments?purpose=condition_evidence`).attach('files', Buffer.from(`photo of ${condition.seq}`), `condition-${condition.seq}.jpg`);
+      const evidence = await a.field_inspector.post(`/api/requests/${id}/attachments?purpose=condition_evidence`).attach('files', await samplePhoto(), `condition-${condition.seq}.jpg`);
       expect(evidence.status).toBe(201);
       await move(
         a.field_inspector,
@@ -193,7 +194,7 @@ describe('federal-aid projects', () => {
     const held = await send(a.engineer_of_record, { type: 'approve' });
     expect(held.status).toBe(409);
     expect(held.body.error.message).toMatch(/23 CFR 635\.120\(a\)/);
-    const letter = await a.central_office.post(`/api/requests/${id}/attachments?purpose=federal_concurrence`).attach('files', Buffer.from('%PDF-1.4 concurrence'), 'concurrence.pdf');
+    const letter = await a.central_office.post(`/api/requests/${id}/attachments?purpose=federal_concurrence`).attach('files', await samplePdf('Concurrence of the federal oversight agency'), 'concurrence.pdf');
     expect(letter.status).toBe(201);
     expect((await send(a.central_office, { type: 'record_federal_concurrence', letterAttachmentId: letter.body[0].id })).status).toBe(200);
     const approved = await send(a.engineer_of_record, { type: 'approve' });

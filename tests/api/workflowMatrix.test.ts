@@ -7,6 +7,7 @@ import { roles, type Role } from '../../shared/roles';
 import { workflowEventTypes, type WorkflowEventType } from '../../shared/workflow/events';
 import { buildTestApp, createScenario, signIn, type TestApp } from '../support/apiHarness';
 import { agentsFor, proposedConditions, requestAt } from '../support/requestFixtures';
+import { samplePhoto } from '../support/sampleFiles';
 
 // Who may make each move in each state (the one role that may); anything not listed is refused.
 const allowed: Partial<Record<RequestState, Partial<Record<WorkflowEventType, Role>>>> = {
@@ -113,7 +114,7 @@ describe('the authorisation matrix of workflow moves', () => {
         const payload = payloadFor(event);
         if (event === 'satisfy_condition') {
           const detail = (await a.field_inspector.get(`/api/requests/${fresh.id}`)).body;
-          const evidence = await a.field_inspector.post(`/api/requests/${fresh.id}/attachments?purpose=condition_evidence`).attach('files', Buffer.from('photo'), 'photo.jpg');
+          const evidence = await a.field_inspector.post(`/api/requests/${fresh.id}/attachments?purpose=condition_evidence`).attach('files', await samplePhoto(), 'photo.jpg');
           Object.assign(payload, { conditionId: detail.conditions[0].id, evidenceAttachmentId: evidence.body[0].id });
         }
         const before = (await a[role].get(`/api/requests/${fresh.id}`)).body;
