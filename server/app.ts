@@ -42,7 +42,7 @@ export function createApp(parts: AppParts) {
     res.json(actorOf(req));
   });
   signedIn.use(projectRoutes(db));
-  signedIn.use(requestRoutes({ db, store, publicUrl: env.PUBLIC_URL, maxFileBytes: env.UPLOAD_MAX_FILE_BYTES }));
+  signedIn.use(requestRoutes({ db, store, publicUrl: env.PUBLIC_URL, maxFileBytes: env.UPLOAD_MAX_FILE_BYTES, maxRequestBytes: env.UPLOAD_MAX_REQUEST_BYTES }));
   app.use(signedIn);
 
   app.use('/api', (_req, _res, next) => next(new HttpError(404, 'no_such_route', 'There is no such API route.')));

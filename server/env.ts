@@ -21,6 +21,7 @@ export const serverEnvSchema = z.object({
   MAIL_CATCHER_URL: z.url().optional(),
   WEB_DIST: z.string().optional(),
   UPLOAD_MAX_FILE_BYTES: z.coerce.number().int().positive().optional(),
+  UPLOAD_MAX_REQUEST_BYTES: z.coerce.number().int().positive().optional(),
 });
 
 export type ServerEnv = z.infer<typeof serverEnvSchema>;

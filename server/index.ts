@@ -15,8 +15,9 @@ async function main() {
   const { db, pool } = createDatabase(env.DATABASE_URL);
   await runMigrations(db, pool);
   const mailer = createMailer(env);
-  const app = createApp({ env, db, auth: createAuth(db, env), store: createObjectStore(env), mailer });
-  const jobs = await startBackgroundJobs({ pool, db, mailer, publicUrl: env.PUBLIC_URL });
+  const store = createObjectStore(env);
+  const app = createApp({ env, db, auth: createAuth(db, env), store, mailer });
+  const jobs = await startBackgroundJobs({ pool, db, mailer, store, publicUrl: env.PUBLIC_URL });
 
   const server = app.listen(env.PORT, '127.0.0.1', () => {
     console.log(`Spanrelay is running at http://127.0.0.1:${env.PORT}`);

@@ -52,7 +52,9 @@ export type JobWorkerOptions = {
   pool: Pool;
   db: Database;
   mailer: Mailer;
-  // Extra scheduled work (the overdue reminders), by task name.
+  // Other queued work (the decision record), by task name.
+  tasks?: Record<string, Task>;
+  // Scheduled work (the overdue reminders), by task name.
   scheduled?: Record<string, { cron: string; run: () => Promise<void> }>;
   pollIntervalMs?: number;
 };
@@ -62,7 +64,7 @@ export async function startJobWorker(opts: JobWorkerOptions): Promise<Runner> {
     const { outboxId } = payload as { outboxId: string };
     await deliverQueuedMail(opts.db, opts.mailer, outboxId);
   };
-  const taskList: Record<string, Task> = { deliver_mail: deliver };
+  const taskList: Record<string, Task> = { ...opts.tasks, deliver_mail: deliver };
   const crontab: string[] = [];
   for (const [name, job] of Object.entries(opts.scheduled ?? {})) {
     taskList[name] = () => job.run();

@@ -10,6 +10,8 @@ import { HttpError } from '../http/errors';
 import { isProjectMember } from '../projects/projectRepository';
 import type { ObjectStore } from '../storage/objectStore';
 import type { StoredUpload } from '../storage/streamingUploadStorage';
+import { previewableTypes } from '../storage/acceptedFileTypes';
+import sharp from 'sharp';
 import { mayRead } from './access';
 import { attachmentOfRequest, attachmentWithProject, requestRow } from './requestRepository';
 
@@ -110,4 +112,31 @@ export async function openAttachment(deps: { db: Database; store: ObjectStore },
   } catch {
     throw new HttpError(503, 'storage_unavailable', 'File storage is not reachable right now. Try again shortly.');
   }
+}
+
+// A resized JPEG of a photo or image, made once and kept beside the original in the store.
+export async function attachmentPreview(deps: { db: Database; store: ObjectStore }, actor: Actor, attachmentId: string): Promise<Buffer> {
+  const row = await attachmentWithProject(deps.db, attachmentId);
+  if (!row || !(await mayRead(deps.db, actor, row.projectId))) throw new HttpError(404, 'attachment_not_found', 'No attachment you can see has that id.');
+  if (!previewableTypes.has(row.attachment.contentType)) throw new HttpError(404, 'no_preview', 'There is no preview of this kind of file; open it instead.');
+  const previewKey = `${row.attachment.objectKey}.preview.jpg`;
+  try {
+    try {
+      return await readAll((await deps.store.get(previewKey)).body);
+    } catch {
+      const original = await readAll((await deps.store.get(row.attachment.objectKey)).body);
+      const preview = await sharp(original).rotate().resize({ width: 640, height: 640, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 75 }).toBuffer();
+      await deps.store.put(previewKey, preview, 'image/jpeg', {});
+      return preview;
+    }
+  } catch (err) {
+    if (err instanceof HttpError) throw err;
+    throw new HttpError(503, 'storage_unavailable', 'File storage is not reachable right now. Try again shortly.');
+  }
+}
+
+async function readAll(stream: NodeJS.ReadableStream): Promise<Buffer> {
+  const chunks: Buffer[] = [];
+  for await (const chunk of stream) chunks.push(Buffer.from(chunk as Buffer));
+  return Buffer.concat(chunks);
 }

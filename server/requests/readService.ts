@@ -77,10 +77,18 @@ export async function detailFor(db: Database, actor: Actor, requestId: string): 
   if (!summary || !(await mayRead(db, actor, summary.project.id))) {
     throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
   }
+  const record = (await requestRecord(db, requestId))!;
+  const member = await isProjectMember(db, summary.project.id, actor.id);
+  const state = isRequestState(record.state) ? record.state : requestStates[0];
+  return { ...record, availableActions: availableEvents(state, record.facts, { id: actor.id, role: actor.role, member }) };
+}
+
+// The request in full, as the record shows it to anyone allowed to read it (no viewer's moves).
+export async function requestRecord(db: Database, requestId: string): Promise<RequestDetail | null> {
+  const summary = await requestSummary(db, requestId);
+  if (!summary) return null;
   const row = await requestRow(db, requestId);
   const facts = (await workflowFactsOf(db, requestId))!;
-  const member = await isProjectMember(db, summary.project.id, actor.id);
-  const state = isRequestState(summary.state) ? summary.state : requestStates[0];
   const [revisions, files, conditions, trail] = await Promise.all([
     revisionsOf(db, requestId),
     attachmentsOf(db, requestId),
@@ -133,7 +141,7 @@ export async function detailFor(db: Database, actor: Actor, requestId: string): 
       at: e.createdAt.toISOString(),
       hash: e.hash,
     })),
-    availableActions: availableEvents(state, facts, { id: actor.id, role: actor.role, member }),
+    availableActions: [],
   };
 }
 

@@ -11,7 +11,7 @@ import { actorOf } from '../auth/requireActor';
 import { HttpError, validationError } from '../http/errors';
 import type { ObjectStore } from '../storage/objectStore';
 import { addComment, applyEvent } from '../workflow/workflowService';
-import { authorizeUpload, objectKeyFor, openAttachment, recordUploads, removeDraftAttachment, type ReceivedFile } from './attachmentService';
+import { attachmentPreview, authorizeUpload, objectKeyFor, openAttachment, recordUploads, removeDraftAttachment, type ReceivedFile } from './attachmentService';
 import { setUploadTarget, streamingUploadStorage } from '../storage/streamingUploadStorage';
 import { createDraft, updateDraft } from './draftService';
 import { detailFor, listFor, verifyFor } from './readService';
@@ -40,7 +40,7 @@ const uploadPurpose = z.enum(['revision', 'information_response', 'federal_concu
 const draftUpdate = z.object({ version: z.number().int().positive(), body: z.unknown() }).strict();
 const commentBody = z.strictObject({ comment: z.string().trim().min(1, 'Write the comment.').max(8000) });
 
-export function requestRoutes(deps: { db: Database; store: ObjectStore; publicUrl: string; maxFileBytes?: number }): Router {
+export function requestRoutes(deps: { db: Database; store: ObjectStore; publicUrl: string; maxFileBytes?: number; maxRequestBytes?: number }): Router {
   const { db, store } = deps;
   const router = Router();
   const upload = multer({
@@ -111,7 +111,7 @@ export function requestRoutes(deps: { db: Database; store: ObjectStore; publicUr
       setUploadTarget(req, {
         keyFor: () => objectKeyFor(target.projectId, id, target.revision),
         usedBytes: target.usedBytes,
-        maxTotalBytes: uploadLimits.maxRequestTotalBytes,
+        maxTotalBytes: deps.maxRequestBytes ?? uploadLimits.maxRequestTotalBytes,
       });
       next();
     },
@@ -140,6 +140,13 @@ export function requestRoutes(deps: { db: Database; store: ObjectStore; publicUr
     res.setHeader('content-disposition', `inline; filename*=UTF-8''${encodeURIComponent(attachment.fileName)}`);
     res.setHeader('x-content-sha256', attachment.sha256);
     object.body.pipe(res);
+  });
+
+  router.get('/api/attachments/:id/preview', async (req, res) => {
+    const preview = await attachmentPreview(deps, actorOf(req), parseId(req.params.id, 'attachment'));
+    res.setHeader('content-type', 'image/jpeg');
+    res.setHeader('cache-control', 'private, max-age=3600');
+    res.send(preview);
   });
 
   return router;

@@ -87,11 +87,18 @@ async function storeOne(store: ObjectStore, target: UploadTarget, file: Express.
   };
   // busboy says 'limit' when the file passes the per-file limit; multer then reports 413.
   file.stream.on('limit', () => stop(new HttpError(413, 'limit_file_size', 'A file is larger than the upload limit.')));
-  meter.on('error', stop);
+  // Our own refusals (the request total) stop the upload; other stream errors follow from a failed
+  // upload and are reported as that failure below.
+  meter.on('error', (err) => {
+    if (err instanceof HttpError) stop(err);
+  });
   body.pipe(meter);
   try {
     await upload.done();
   } catch (err) {
+    // Let the rest of this file drain, so the other parts of the upload can still be read.
+    body.unpipe(meter);
+    body.resume();
     if (refused) throw refused;
     console.error('[spanrelay] object store refused an upload', err);
     throw new HttpError(503, 'storage_unavailable', 'File storage is not reachable right now; nothing was saved. Try again shortly.');

@@ -20,6 +20,7 @@ import { staleVersion } from '../requests/draftService';
 import { attachmentOfRequest, currentRevisionRow, lockRequest, membersWithRole, openConditionCount } from '../requests/requestRepository';
 import { appendTrailEvent } from '../trail/trailChain';
 import { notificationsFor } from './notifications';
+import { queueDecisionRecord } from '../documents/decisionRecordJob';
 
 type Locked = NonNullable<Awaited<ReturnType<typeof lockRequest>>> & { actorId: string };
 type Change = Partial<typeof changeRequests.$inferInsert>;
@@ -177,6 +178,7 @@ export async function applyEvent(deps: { db: Database; publicUrl: string }, acto
       closedByThisMove: stateAfter === 'closed' && input.type === 'satisfy_condition',
     });
     await queueMail(tx, mails);
+    if (input.type === 'approve' || input.type === 'approve_with_conditions' || input.type === 'reject') await queueDecisionRecord(tx, r.id, actor.id);
   });
 }
 

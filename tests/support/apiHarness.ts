@@ -34,7 +34,7 @@ export function buildTestApp(overrides: Partial<Record<keyof ServerEnv, string>>
     // The job worker (mail, reminders) only where a test wants delivery: a worker with a broken
     // SMTP setting would otherwise pick up and delay other tests' mail.
     startJobs: async () => {
-      runner ??= await startBackgroundJobs({ pool, db, mailer, publicUrl: env.PUBLIC_URL, pollIntervalMs: 200 });
+      runner ??= await startBackgroundJobs({ pool, db, mailer, store, publicUrl: env.PUBLIC_URL, pollIntervalMs: 200 });
       return runner;
     },
     stopJobs: async () => {
