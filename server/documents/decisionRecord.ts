@@ -5,6 +5,7 @@ import PDFDocument from 'pdfkit';
 import { join } from 'node:path';
 import { requestTypeLabels, type RequestType } from '../../shared/requests/requestBody';
 import { stateLabel } from '../../shared/requests/states';
+import { labelledBodyFields } from '../../shared/requests/bodyFields';
 import type { RequestDetail } from '../../shared/requests/types';
 import { roleLabels } from '../../shared/roles';
 import { engineeringCaution } from '../../shared/engineering';
@@ -19,30 +20,6 @@ const decisionWords: Record<string, string> = {
   approved_with_conditions: 'Approved with conditions',
   rejected: 'Rejected',
 };
-
-const fieldLabels: Record<string, string> = {
-  title: 'Title',
-  structureNumber: 'Structure',
-  'location.description': 'Location',
-  'location.span': 'Span',
-  'location.station': 'Station',
-  planSheets: 'Plan sheets',
-  reason: 'Reason',
-  proposedChange: 'Proposed change',
-  neededBy: 'Needed by',
-  'costImpact.kind': 'Cost impact',
-  'costImpact.amountUsd': 'Amount (USD)',
-  contractTimeImpactDays: 'Contract-time impact (days)',
-};
-
-function flatten(value: unknown, prefix = '', out: [string, string][] = []): [string, string][] {
-  if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
-    for (const [k, v] of Object.entries(value as Record<string, unknown>)) flatten(v, prefix ? `${prefix}.${k}` : k, out);
-  } else if (value !== undefined) {
-    out.push([prefix, Array.isArray(value) ? value.join(', ') : String(value)]);
-  }
-  return out;
-}
 
 const when = (iso: string) => new Date(iso).toISOString().replace('T', ' ').slice(0, 16) + ' UTC';
 
@@ -74,10 +51,7 @@ export function renderDecisionRecord({ request: r, chain, generatedAt }: Decisio
 
   const current = r.revisions.at(-1);
   heading(`The request (revision ${current?.revision ?? 1} of ${r.revisions.length})`);
-  for (const [path, value] of flatten(current?.body ?? {})) {
-    if (path === 'type' || path === 'projectId') continue;
-    pair(fieldLabels[path] ?? path, value);
-  }
+  for (const field of labelledBodyFields(current?.body ?? {})) pair(field.label, field.value);
 
   heading('Engineering check');
   const check = current?.engineering as { verdict?: string; findings?: string[]; engineeringVersion?: string } | null | undefined;
