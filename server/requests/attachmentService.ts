@@ -13,7 +13,7 @@ import type { StoredUpload } from '../storage/streamingUploadStorage';
 import { previewableTypes } from '../storage/acceptedFileTypes';
 import sharp from 'sharp';
 import { mayRead } from './access';
-import { attachmentOfRequest, attachmentWithProject, requestRow } from './requestRepository';
+import { attachmentOfRequest, attachmentWithProject, requestRow, toAttachmentSummary } from './requestRepository';
 
 export type AttachmentPurpose = (typeof attachmentPurposes)[number];
 export type UploadPurpose = Exclude<AttachmentPurpose, 'decision_record'>;
@@ -72,17 +72,7 @@ export async function recordUploads(
         )
         .returning(),
     );
-    return rows.map((a) => ({
-      id: a.id,
-      revision: a.revision,
-      purpose: a.purpose,
-      fileName: a.fileName,
-      contentType: a.contentType,
-      sizeBytes: a.sizeBytes,
-      sha256: a.sha256,
-      uploadedBy: actor.name,
-      uploadedAt: a.uploadedAt.toISOString(),
-    }));
+    return rows.map((a) => toAttachmentSummary(a, actor.name));
   } catch (err) {
     await removeAll();
     throw err;

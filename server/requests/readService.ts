@@ -19,6 +19,7 @@ import {
   requestRow,
   requestSummary,
   revisionsOf,
+  toAttachmentSummary,
   trailOf,
 } from './requestRepository';
 import type { RequestListQuery } from '../../shared/requests/listQuery';
@@ -107,17 +108,7 @@ export async function requestRecord(db: Database, requestId: string): Promise<Re
       submittedAt: r.submittedAt?.toISOString() ?? null,
       changes: i === 0 ? [] : revisionChanges(revisions[i - 1]!.body, r.body),
     })),
-    attachments: files.map(({ attachment: a, uploaderName }) => ({
-      id: a.id,
-      revision: a.revision,
-      purpose: a.purpose,
-      fileName: a.fileName,
-      contentType: a.contentType,
-      sizeBytes: a.sizeBytes,
-      sha256: a.sha256,
-      uploadedBy: uploaderName,
-      uploadedAt: a.uploadedAt.toISOString(),
-    })),
+    attachments: files.map(({ attachment, uploaderName }) => toAttachmentSummary(attachment, uploaderName)),
     conditions: conditions.map(({ condition: c, satisfierName, satisfierOrganization }) => ({
       id: c.id,
       seq: c.seq,

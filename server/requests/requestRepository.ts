@@ -3,7 +3,7 @@
 import { aliasedTable, and, asc, count, eq, gt, ilike, inArray, isNull, or, sql, type SQL } from 'drizzle-orm';
 import type { Database, Transaction } from '../../db/client';
 import { attachments, changeRequests, projectMembers, projects, requestConditions, requestRevisions, trailEvents, users } from '../../db/schema';
-import type { RequestSummary } from '../../shared/requests/types';
+import type { AttachmentSummary, RequestSummary } from '../../shared/requests/types';
 import type { Role } from '../../shared/roles';
 
 type Executor = Database | Transaction;
@@ -160,6 +160,20 @@ export async function currentRevisionRow(db: Executor, requestId: string, revisi
     .from(requestRevisions)
     .where(and(eq(requestRevisions.requestId, requestId), eq(requestRevisions.revision, revision)));
   return row ?? null;
+}
+
+export function toAttachmentSummary(a: typeof attachments.$inferSelect, uploaderName: string): AttachmentSummary {
+  return {
+    id: a.id,
+    revision: a.revision,
+    purpose: a.purpose,
+    fileName: a.fileName,
+    contentType: a.contentType,
+    sizeBytes: a.sizeBytes,
+    sha256: a.sha256,
+    uploadedBy: uploaderName,
+    uploadedAt: a.uploadedAt.toISOString(),
+  };
 }
 
 export async function attachmentsOf(db: Executor, requestId: string) {

@@ -82,6 +82,8 @@ export const requestMachine = setup({
       on: {
         route: { guard: 'mayRoute', target: 'eor_review', actions: 'assignEor' },
         return_for_revision: { guard: 'mayReturnFromCentral', target: 'revising' },
+        // Central office classifies the change and records the federal concurrence while the
+        // request is with it or with the engineer of record; both states carry the same two moves.
         classify_change: { guard: and(['mayClassify', 'readyToClassify']), actions: 'recordClassification' },
         record_federal_concurrence: { guard: and(['mayRecordConcurrence', 'readyToRecordConcurrence']), actions: 'recordConcurrence' },
         withdraw: { guard: 'mayWithdraw', target: 'withdrawn' },
