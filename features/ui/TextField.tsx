@@ -1,8 +1,10 @@
+import type { Ref } from 'react';
 import { TextInput, View, StyleSheet, type TextInputProps } from 'react-native';
 import { Text } from './Text';
 import { colors, fonts, radius, space } from './theme';
 
-type Props = TextInputProps & { label: string; error?: string; hint?: string };
+// `ref` reaches the input so a form can move focus to the first field that needs attention.
+type Props = TextInputProps & { label: string; error?: string; hint?: string; ref?: Ref<TextInput> };
 
 export function TextField({ label, error, hint, style, multiline, ...input }: Props) {
   return (
