@@ -2,6 +2,7 @@
 // box. A move is chosen first and sent second, so one tap never settles a request by accident.
 import { useEffect, useState } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import { isRequestState, requestStateInfo } from '../../shared/requests/states';
 import type { RequestDetail } from '../../shared/requests/types';
 import type { Role } from '../../shared/roles';
 import { workflowEventLabels, workflowEventPastTense, workflowEventSchema, type WorkflowEventType } from '../../shared/workflow/events';
@@ -156,12 +157,16 @@ export function ActionPanel({ request, actorRole }: Props) {
   }
 
   const busy = workflow.isPending || addComment.isPending;
+  // "Your move" only when the request waits at this person's desk; a contractor may withdraw at
+  // any time, but that is not something asked of them.
+  const atMyDesk = isRequestState(request.state) && actorRole !== undefined && requestStateInfo[request.state].desk === actorRole;
+  const title = moves.length === 0 ? 'Comment on the request' : atMyDesk ? 'Your move' : 'What you can do';
   const needsComment = chosen !== null && commentRequired.has(chosen);
-  const commentLabel = chosen === null ? 'Comment' : needsComment ? 'Comment (required)' : 'Comment (optional)';
+  const commentLabel = chosen === null ? 'Your comment' : needsComment ? 'Comment (required)' : 'Comment (optional)';
   const conditionsError = errors.conditions;
 
   return (
-    <Panel title={moves.length > 0 ? 'Your move' : 'Comment'} emphasis={moves.length > 0} testID="action-panel">
+    <Panel title={title} emphasis={atMyDesk && moves.length > 0} testID="action-panel">
       {done ? <Notice tone="ok" testID="action-done">{done}</Notice> : null}
       {moves.length > 0 ? (
         <View style={styles.group} accessibilityRole="radiogroup" accessibilityLabel="What to do with the request">
@@ -233,7 +238,7 @@ export function ActionPanel({ request, actorRole }: Props) {
 
       <TextField
         label={commentLabel}
-        hint={chosen === null ? undefined : needsComment ? 'Say why; it goes on the trail and in the e-mail.' : 'It goes on the trail and in the e-mail.'}
+        hint={chosen === null ? (moves.length > 0 ? 'Choose a move above to send it with the move, or add it on its own.' : undefined) : needsComment ? 'Say why; it goes on the trail and in the e-mail.' : 'It goes on the trail and in the e-mail.'}
         value={comment}
         onChangeText={setComment}
         multiline
@@ -243,7 +248,14 @@ export function ActionPanel({ request, actorRole }: Props) {
       {failure ? <Notice tone="error" testID="action-failure">{failure}</Notice> : null}
       {errors.move ? <FieldError message={errors.move} /> : null}
       <View style={styles.buttons}>
-        <Button label={chosen ? workflowEventLabels[chosen] : 'Add the comment'} busy={busy} onPress={send} testID="action-send" />
+        {/* Without a move chosen, the button only comments; it must not look like the way forward. */}
+        <Button
+          kind={chosen || moves.length === 0 ? 'primary' : 'secondary'}
+          label={chosen ? workflowEventLabels[chosen] : moves.length > 0 ? 'Add the comment only' : 'Add the comment'}
+          busy={busy}
+          onPress={send}
+          testID="action-send"
+        />
         {chosen ? <Button kind="quiet" label="Cancel" onPress={() => choose(chosen)} /> : null}
       </View>
     </Panel>

@@ -68,7 +68,7 @@ export function NewRequestScreen() {
       at = 'submit';
       setStep('submit');
       const submitted = await workflow.mutateAsync({ id: current.id, event: { type: 'submit', version: current.version } });
-      router.replace(`/requests/${submitted.id}`);
+      router.replace({ pathname: '/requests/[id]', params: { id: submitted.id, filed: '1' } });
     } catch (err) {
       const error = asApiError(err);
       if (current) {

@@ -97,7 +97,7 @@ function Conditions({ conditions }: { conditions: ConditionView[] }) {
 }
 
 export function RequestDetailScreen() {
-  const { id } = useLocalSearchParams<{ id: string }>();
+  const { id, filed } = useLocalSearchParams<{ id: string; filed?: string }>();
   const request = useRequestDetail(String(id));
   const { data: actor } = useActor();
   const { width } = useWindowDimensions();
@@ -125,6 +125,9 @@ export function RequestDetailScreen() {
   return (
     <Screen wide={wide}>
       <Header r={r} />
+      {filed === '1' && r.state === 'section_review' ? (
+        <Notice tone="ok" testID="request-filed">The request is filed. It is with the section engineer, who has been told by e-mail; you are told by e-mail when it comes back to you or is decided.</Notice>
+      ) : null}
       {request.isRefetching ? <Text variant="muted" accessibilityLiveRegion="polite">Checking for changes…</Text> : null}
       {wide ? (
         <View style={styles.columns}>

@@ -243,7 +243,7 @@ export function RequestFilingForm({ projects, busy, progress, projectLocked, sav
             <TextField
               ref={field.ref}
               label="Decision needed by"
-              hint="The date the work is held without an answer, as YYYY-MM-DD."
+              hint="The latest date an answer keeps the work on schedule, as YYYY-MM-DD."
               placeholder="YYYY-MM-DD"
               value={field.value}
               onChangeText={field.onChange}

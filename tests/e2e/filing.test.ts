@@ -1,5 +1,6 @@
 // The walking skeleton through the browser: a contractor files a request with a drawing, the
-// section engineer is mailed and finds it at their desk. Once at phone size, once on a wide screen.
+// section engineer is mailed, finds it at their desk and forwards it to central office with a
+// comment. Once at phone size, once on a wide screen.
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
@@ -39,6 +40,40 @@ async function mailFor(to: string, subjectPart: string): Promise<CaughtMail | un
   return undefined;
 }
 
+async function fillOtherDeviation(page: Page, title: string) {
+  await page.getByTestId('filing-title').fill(title);
+  await page.getByTestId('filing-location').fill('Deck drain DR-4 over pier 2, north fascia');
+  await page.getByTestId('filing-span').fill('2');
+  await page.getByTestId('filing-station').fill('12+40');
+  await page.getByTestId('filing-plan-sheets').fill('S-12, D-3');
+  await page.getByTestId('filing-reason').fill('The outlet as drawn on sheet D-3 lands on the pier cap step; the downspout cannot clear it.');
+  await page.getByTestId('filing-proposed-change').fill('Move the outlet 18 in toward span 3 and extend the downspout with two 45° bends.');
+  await page.getByTestId('filing-needed-by').fill('2027-04-15');
+  await page.getByTestId('filing-cost-added_cost').click();
+  await page.getByTestId('filing-cost-amount').fill('1850');
+  await page.getByTestId('filing-time-impact').fill('0');
+  const chooser = page.waitForEvent('filechooser');
+  await page.getByTestId('filing-add-files').click();
+  await (await chooser).setFiles({ name: 'D-3 drain outlet markup.pdf', mimeType: 'application/pdf', buffer: Buffer.from('%PDF-1.4\n% sheet D-3\n%%EOF\n') });
+  await expect.poll(() => page.getByTestId('filing-file').count()).toBe(1);
+}
+
+// The app scrolls inside its own view, not the document, so a full-page shot would stop at the
+// window: grow the window to the content for the shot, then put it back.
+async function screenshotWhole(page: Page, vp: { width: number; height: number }, path: string) {
+  // A string, because this file is checked without the DOM's types.
+  const contentHeight = await page.evaluate<number>(`(() => {
+    let tallest = document.documentElement.scrollHeight;
+    for (const el of document.querySelectorAll('div')) {
+      if (el.scrollHeight > el.clientHeight) tallest = Math.max(tallest, el.scrollHeight + el.getBoundingClientRect().top);
+    }
+    return Math.ceil(tallest);
+  })()`);
+  await page.setViewportSize({ width: vp.width, height: Math.max(vp.height, Math.min(contentHeight, 8000)) });
+  await page.screenshot({ path });
+  await page.setViewportSize({ width: vp.width, height: vp.height });
+}
+
 describe('filing a request through the web app', () => {
   let browser: Browser;
   beforeAll(async () => {
@@ -50,11 +85,11 @@ describe('filing a request through the web app', () => {
   });
 
   for (const vp of viewports) {
-    it(`contractor files, section engineer sees it (${vp.name} ${vp.width}×${vp.height})`, async () => {
+    it(`contractor files, section engineer forwards it (${vp.name} ${vp.width}×${vp.height})`, async () => {
       const context = await browser.newContext({ viewport: { width: vp.width, height: vp.height } });
       const page = await context.newPage();
-      const shot = (step: string) => page.screenshot({ path: join(shots, `${vp.name}-${step}.png`), fullPage: true });
-      const title = `Place span 2 deck in one pour (${vp.name})`;
+      const shot = (step: string) => screenshotWhole(page, vp, join(shots, `${vp.name}-${step}.png`));
+      const title = `Relocate deck drain outlet at pier 2 (${vp.name})`;
 
       await signInAs(page, 'contractor');
       await shot('1-contractor-desk');
@@ -63,25 +98,28 @@ describe('filing a request through the web app', () => {
 
       // The form refuses an empty submission and says which fields need attention.
       await page.getByTestId('filing-submit').click();
-      await expect.poll(() => page.getByText('The title needs at least 5 characters.').count()).toBe(1);
+      await expect.poll(() => page.getByText('Enter a title (at least 5 characters).').count()).toBe(1);
+      await expect.poll(() => page.getByTestId('filing-needs-attention').count()).toBe(1);
+      expect(await page.getByText('Say whether the change costs more, less, or the same.').count()).toBe(1);
+      await shot('2-filing-refused');
 
-      await page.getByTestId('filing-title').fill(title);
-      await page.getByTestId('filing-reason').fill('Pump capacity allows a single placement with Type D retarded concrete instead of the three phases on sheet S-6.');
-      const chooser = page.waitForEvent('filechooser');
-      await page.getByTestId('filing-add-files').click();
-      await (await chooser).setFiles({ name: 'S-6 placement sequence.pdf', mimeType: 'application/pdf', buffer: Buffer.from('%PDF-1.4\n% sheet S-6\n%%EOF\n') });
-      await expect.poll(() => page.getByTestId('filing-file').count()).toBe(1);
-      await shot('2-filing-form');
+      await fillOtherDeviation(page, title);
+      expect(await page.getByTestId('filing-needs-attention').count()).toBe(0);
+      await shot('3-filing-form');
       await page.getByTestId('filing-submit').click();
 
-      await page.waitForURL(/\/requests\/[0-9a-f-]{36}$/);
+      await page.waitForURL(/\/requests\/[0-9a-f-]{36}(\?filed=1)?$/);
+      await expect.poll(() => page.getByTestId('request-filed').count()).toBe(1);
       const detail = page.getByTestId('request-detail');
       await expect.poll(() => detail.textContent()).toContain(title);
       const header = (await detail.textContent()) ?? '';
       const number = /PC-0114-\d{3}/.exec(header)?.[0];
       expect(number, `request number in "${header}"`).toBeTruthy();
-      expect(await page.getByText('S-6 placement sequence.pdf').count()).toBe(1);
-      await shot('3-filed-request');
+      expect(header).toContain('With the section engineer');
+      expect(await page.getByText('D-3 drain outlet markup.pdf').count()).toBe(1);
+      expect(await page.getByTestId('request-cost').textContent()).toContain('1,850');
+      expect(await page.getByTestId('request-location').textContent()).toContain('station 12+40');
+      await shot('4-filed-request');
 
       const mail = await mailFor(demoEmail('section_engineer'), number!);
       expect(mail, 'mail to the section engineer').toBeDefined();
@@ -92,13 +130,58 @@ describe('filing a request through the web app', () => {
       await signInAs(page, 'section_engineer');
       const waiting = page.getByTestId('desk-waiting');
       await expect.poll(() => waiting.textContent()).toContain(number!);
-      await shot('4-section-engineer-desk');
+      await shot('5-section-engineer-desk');
 
       await page.getByText(title).first().click();
       await page.waitForURL(/\/requests\/[0-9a-f-]{36}$/);
       await expect.poll(() => page.getByTestId('request-detail').textContent()).toContain(number!);
-      await shot('5-section-engineer-request');
+      await shot('6-section-engineer-request');
+
+      // Forward through the action panel: choose the move, say why, send.
+      await page.getByTestId('action-forward').click();
+      const comment = 'Checked on site: the pier cap step is as built. The longer downspout clears it; no conflict with the bearing.';
+      await page.getByTestId('action-comment').fill(comment);
+      await shot('7-forwarding');
+      await page.getByTestId('action-send').click();
+      await expect.poll(() => page.getByTestId('request-state').textContent()).toBe('With central office for routing');
+      await expect.poll(() => page.getByTestId('action-done').textContent()).toContain('Forwarded to central office');
+      const trail = (await page.getByTestId('request-trail').textContent()) ?? '';
+      expect(trail).toContain('Forwarded to central office');
+      expect(trail).toContain(comment);
+      expect(await page.getByTestId('action-forward').count()).toBe(0);
+      await shot('8-forwarded');
       await context.close();
     });
   }
+
+  // The draft is saved but storing its files fails: the person is told, nothing is lost, and
+  // pressing the button again finishes the same request instead of starting a second one.
+  it('a failed upload keeps the draft, and filing again completes it', async () => {
+    const vp = viewports[0]!;
+    const context = await browser.newContext({ viewport: { width: vp.width, height: vp.height } });
+    const page = await context.newPage();
+    const title = 'Relocate deck drain outlet at pier 2 (retry)';
+    await signInAs(page, 'contractor');
+    await page.getByTestId('desk-new-request').click();
+    await page.waitForURL(/\/requests\/new/);
+    await fillOtherDeviation(page, title);
+
+    const storageDown = JSON.stringify({ error: { code: 'storage_unavailable', message: 'File storage is not reachable right now; nothing was saved. Try again shortly.' } });
+    await page.route('**/api/requests/*/attachments*', (route) => route.fulfill({ status: 503, contentType: 'application/json', body: storageDown }));
+    await page.getByTestId('filing-submit').click();
+    await expect.poll(() => page.getByTestId('filing-failure').textContent()).toContain('The draft is saved, but its files were not stored.');
+    const failure = (await page.getByTestId('filing-failure').textContent()) ?? '';
+    const number = /PC-0114-\d{3}/.exec(failure)?.[0];
+    expect(number, `draft number in "${failure}"`).toBeTruthy();
+    expect(await page.getByTestId('filing-draft-link').count()).toBe(1);
+    await screenshotWhole(page, vp, join(shots, 'phone-9-upload-failed.png'));
+
+    await page.unroute('**/api/requests/*/attachments*');
+    await page.getByTestId('filing-submit').click();
+    await page.waitForURL(/\/requests\/[0-9a-f-]{36}(\?filed=1)?$/);
+    await expect.poll(() => page.getByTestId('request-detail').textContent()).toContain(number!);
+    expect(await page.getByTestId('request-state').textContent()).toBe('With the section engineer');
+    expect(await page.getByText('D-3 drain outlet markup.pdf').count()).toBe(1);
+    await context.close();
+  });
 });
