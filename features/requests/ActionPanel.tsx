@@ -55,6 +55,12 @@ const settling: ReadonlySet<PanelMove> = new Set(['approve', 'reject', 'withdraw
 type ConditionRow = { text: string; dueBefore: string };
 const emptyCondition = (): ConditionRow => ({ text: '', dueBefore: '' });
 
+// Spare empty rows are dropped, but an all-empty list is sent as is so each row says what it lacks.
+function withoutBlankRows(rows: ConditionRow[]): ConditionRow[] {
+  const filled = rows.filter((c) => c.text.trim() !== '' || c.dueBefore.trim() !== '');
+  return filled.length > 0 ? filled : rows;
+}
+
 function isPanelMove(type: string): type is PanelMove {
   return (panelMoves as readonly string[]).includes(type);
 }
@@ -126,13 +132,16 @@ export function ActionPanel({ request, actorRole }: Props) {
       );
       return;
     }
+    // Blank rows go before checking, so an error's row number is the row the person sees.
+    const rows = withoutBlankRows(conditions);
+    if (chosen === 'approve_with_conditions' && rows.length !== conditions.length) setConditions(rows);
     const note = comment.trim() === '' ? undefined : comment.trim();
     const base = { type: chosen, version: request.version, comment: note };
     const draft =
       chosen === 'route' || chosen === 'reassign'
         ? { ...base, eorUserId: eorUserId ?? '' }
         : chosen === 'approve_with_conditions'
-          ? { ...base, conditions: conditions.filter((c) => c.text.trim() !== '' || c.dueBefore.trim() !== '') }
+          ? { ...base, conditions: rows }
           : base;
     const parsed = workflowEventSchema.safeParse(draft);
     if (!parsed.success) {
@@ -220,7 +229,7 @@ export function ActionPanel({ request, actorRole }: Props) {
               />
               <TextField
                 label="Due before"
-                placeholder="before placement"
+                placeholder="e.g. before placement"
                 value={c.dueBefore}
                 onChangeText={(dueBefore) => setConditions(conditions.map((x, j) => (j === i ? { ...x, dueBefore } : x)))}
                 error={errors[`conditions.${i}.dueBefore`]}

@@ -98,7 +98,7 @@ export function NewRequestScreen() {
   // Beside the button that was pressed, where the eye is on a long form.
   const failureNotice = failure ? (
     <View style={styles.failure} accessibilityLiveRegion="assertive" testID="filing-failure">
-      <Notice tone="error">{`${stepFailed[failure.step]} ${failure.error.message}`}</Notice>
+      <Notice tone="error">{`${stepFailed[failure.step]} The server answered: ${failure.error.message}`}</Notice>
       {unplaced.map(([path, message]) => (
         <Text key={path} variant="muted" style={styles.detail}>{path === '_' ? message : `${path}: ${message}`}</Text>
       ))}

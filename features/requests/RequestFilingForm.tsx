@@ -166,7 +166,7 @@ export function RequestFilingForm({ projects, busy, progress, projectLocked, sav
                 <TextField
                   ref={field.ref}
                   label="Station (optional)"
-                  placeholder="12+40"
+                  placeholder="e.g. 12+40"
                   value={field.value}
                   onChangeText={field.onChange}
                   onBlur={field.onBlur}
@@ -289,7 +289,7 @@ export function RequestFilingForm({ projects, busy, progress, projectLocked, sav
                 ref={field.ref}
                 label={costKind === 'credit' ? 'Credit, in dollars' : 'Added cost, in dollars'}
                 hint="Your estimate; the final figure is settled by the contract’s change procedure."
-                placeholder="1850"
+                placeholder="e.g. 1850"
                 value={field.value}
                 onChangeText={field.onChange}
                 onBlur={field.onBlur}
