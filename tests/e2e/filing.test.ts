@@ -132,7 +132,8 @@ describe('filing a request through the web app', () => {
       await expect.poll(() => waiting.textContent()).toContain(number!);
       await shot('5-section-engineer-desk');
 
-      await page.getByText(title).first().click();
+      // By number, not title: the e2e database keeps requests from earlier runs with the same title.
+      await waiting.getByTestId('request-card').filter({ hasText: number! }).click();
       await page.waitForURL(/\/requests\/[0-9a-f-]{36}$/);
       await expect.poll(() => page.getByTestId('request-detail').textContent()).toContain(number!);
       await shot('6-section-engineer-request');
