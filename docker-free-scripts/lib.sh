@@ -90,7 +90,7 @@ pg_down() {
 
 pg_psql() {
   local port="$1"; shift
-  "$PG_BIN/psql" -h 127.0.0.1 -p "$port" -U postgres -v ON_ERROR_STOP=1 -qtA "$@"
+  PGOPTIONS="-c client_min_messages=warning" "$PG_BIN/psql" -h 127.0.0.1 -p "$port" -U postgres -v ON_ERROR_STOP=1 -qtA "$@"
 }
 
 pg_ensure_db() {
