@@ -10,6 +10,7 @@ export function createDatabase(url: string, max = 10): { db: Database; pool: Poo
   const pool = new Pool({ connectionString: url, max, connectionTimeoutMillis: 5000 });
   // An idle client losing its connection (a database restart) must not crash the process.
   pool.on('error', (err) => console.error('[spanrelay] database connection lost:', err.message));
+  pool.on('connect', (client) => client.on('error', (err) => console.error('[spanrelay] database client error:', err.message)));
   const db = drizzle(pool, { schema });
   return { db, pool };
 }
