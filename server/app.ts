@@ -9,6 +9,7 @@ import { actorOf, requireActor } from './auth/requireActor';
 import { devMailRoutes } from './dev/devMailRoutes';
 import { healthRoutes } from './health/healthRoutes';
 import { errorHandler, HttpError } from './http/errors';
+import { sameOriginWrites, securityHeaders } from './http/security';
 import type { Mailer } from './mail/mailer';
 import { projectRoutes } from './projects/projectRoutes';
 import { requestRoutes } from './requests/requestRoutes';
@@ -28,6 +29,8 @@ export function createApp(parts: AppParts) {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  app.use(securityHeaders(env.NODE_ENV === 'production'));
+  app.use('/api', sameOriginWrites(env.PUBLIC_URL));
 
   // better-auth reads its own body, so it is mounted before the JSON parser.
   app.all('/api/auth/*splat', toNodeHandler(auth));
