@@ -15,6 +15,7 @@ import {
   attachmentsOf,
   conditionsOf,
   listRequests,
+  membersWithRole,
   openConditionCount,
   requestRow,
   requestSummary,
@@ -143,4 +144,11 @@ export async function verifyFor(db: Database, actor: Actor, requestId: string) {
   }
   const result = await verifyTrail(db, requestId);
   return result.ok ? { ok: true as const, events: result.events } : result;
+}
+
+// The engineers of record on the request's project, for central office to route or reassign to.
+export async function engineersOfRecordFor(db: Database, actor: Actor, requestId: string) {
+  const row = await requestRow(db, requestId);
+  if (!row || !(await mayRead(db, actor, row.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+  return membersWithRole(db, row.request.projectId, 'engineer_of_record');
 }

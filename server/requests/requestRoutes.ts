@@ -14,10 +14,7 @@ import { addComment, applyEvent } from '../workflow/workflowService';
 import { attachmentPreview, authorizeUpload, objectKeyFor, openAttachment, recordUploads, removeDraftAttachment, type ReceivedFile } from './attachmentService';
 import { setUploadTarget, streamingUploadStorage } from '../storage/streamingUploadStorage';
 import { createDraft, updateDraft } from './draftService';
-import { detailFor, listFor, verifyFor } from './readService';
-import { membersWithRole } from './requestRepository';
-import { mayRead } from './access';
-import { requestRow } from './requestRepository';
+import { detailFor, engineersOfRecordFor, listFor, verifyFor } from './readService';
 
 const idParam = z.uuid();
 
@@ -92,10 +89,7 @@ export function requestRoutes(deps: { db: Database; store: ObjectStore; publicUr
 
   // The engineers of record central office may route this request to.
   router.get('/api/requests/:id/engineers-of-record', async (req, res) => {
-    const id = parseId(req.params.id, 'request');
-    const row = await requestRow(db, id);
-    if (!row || !(await mayRead(db, actorOf(req), row.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
-    res.json(await membersWithRole(db, row.request.projectId, 'engineer_of_record'));
+    res.json(await engineersOfRecordFor(db, actorOf(req), parseId(req.params.id, 'request')));
   });
 
   // Authorise first, so nothing is read from a caller who may not upload here; then stream.
