@@ -3,6 +3,10 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildTestApp, createScenario, signIn, testPassword, type TestApp } from '../support/apiHarness';
 
+function sessionCookie(header: string | string[] | undefined): string | undefined {
+  return [header ?? []].flat().find((c) => c.includes('session_token'));
+}
+
 describe('sessions and browser protections', () => {
   let t: TestApp;
   let s: Awaited<ReturnType<typeof createScenario>>;
@@ -26,7 +30,7 @@ describe('sessions and browser protections', () => {
 
   it('keeps the session cookie out of scripts and off cross-site requests', async () => {
     const res = await request(t.app).post('/api/auth/sign-in/email').set('origin', t.env.PUBLIC_URL).send({ email: s.contractor.email, password: testPassword });
-    const cookie = [res.headers['set-cookie']].flat().find((c: string) => c.includes('session_token'));
+    const cookie = sessionCookie(res.headers['set-cookie']);
     expect(cookie).toMatch(/HttpOnly/i);
     expect(cookie).toMatch(/SameSite=Lax/i);
   });
@@ -35,7 +39,7 @@ describe('sessions and browser protections', () => {
     const https = buildTestApp({ NODE_ENV: 'production', PUBLIC_URL: 'https://spanrelay.example' });
     try {
       const res = await request(https.app).post('/api/auth/sign-in/email').set('origin', 'https://spanrelay.example').send({ email: s.contractor.email, password: testPassword });
-      const cookie = [res.headers['set-cookie']].flat().find((c: string) => c.includes('session_token'));
+      const cookie = sessionCookie(res.headers['set-cookie']);
       expect(cookie).toMatch(/Secure/);
     } finally {
       await https.close();
@@ -55,7 +59,7 @@ describe('sessions and browser protections', () => {
     const agent = await signIn(t, s.contractor.email);
     expect((await agent.get('/api/me')).status).toBe(200);
     const res = await agent.post('/api/auth/sign-in/email').set('origin', t.env.PUBLIC_URL).send({ email: s.contractor.email, password: testPassword });
-    const cookie = [res.headers['set-cookie']].flat().find((c: string) => c.includes('session_token'))!.split(';')[0]!;
+    const cookie = sessionCookie(res.headers['set-cookie'])!.split(';')[0]!;
     expect((await request(t.app).get('/api/me').set('cookie', cookie)).status).toBe(200);
     expect((await request(t.app).post('/api/auth/sign-out').set('origin', t.env.PUBLIC_URL).set('cookie', cookie)).status).toBe(200);
     expect((await request(t.app).get('/api/me').set('cookie', cookie)).status).toBe(401);
