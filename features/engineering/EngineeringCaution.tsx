@@ -3,8 +3,9 @@ import { StyleSheet, Text, View } from 'react-native';
 import { engineeringCaution, engineeringVersion } from '../../shared/engineering';
 import { plotColors, plotFont } from './plotStyle';
 
-export function EngineeringCaution({ showVersion = false, testID }: { showVersion?: boolean; testID?: string }) {
-  const text = showVersion ? `${engineeringCaution} (Engineering checks ${engineeringVersion}.)` : engineeringCaution;
+// `version` names the checks that produced a stored result, which may be older than this build.
+export function EngineeringCaution({ showVersion = false, version, testID }: { showVersion?: boolean; version?: string; testID?: string }) {
+  const text = showVersion || version ? `${engineeringCaution} (Engineering checks ${version ?? engineeringVersion}.)` : engineeringCaution;
   return (
     <View style={styles.box} testID={testID} accessible accessibilityRole="text" accessibilityLabel={text}>
       <Text style={styles.text}>{text}</Text>

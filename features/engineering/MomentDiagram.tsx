@@ -15,16 +15,27 @@ type Props = {
   /** Rendered width in px; the drawing scales to it. */
   width: number;
   proposedJointFt?: number;
+  /** What the proposed mark is called ("Joint", "Emergency joint"). */
+  jointLabel?: string;
+  /** The joint where the plans put it, drawn lighter on its own label row. */
+  plannedJointFt?: number;
   showSummary?: boolean;
   testID?: string;
 };
 
 const VIEW_HEIGHT = 250;
-const margin = { left: 52, right: 14, top: 22, bottom: 52 };
+const baseMargin = { left: 52, right: 14, top: 22, bottom: 52 };
 type Point = { x: number; m: number };
 
-export function MomentDiagram({ beam, width, proposedJointFt, showSummary = true, testID }: Props) {
-  const summary = momentDiagramSummary(beam, proposedJointFt);
+// Near an end a centred label would run off the drawing, so it hangs inward instead.
+function anchorFor(px: number): 'start' | 'middle' | 'end' {
+  return px < VIEW_WIDTH * 0.2 ? 'start' : px > VIEW_WIDTH * 0.8 ? 'end' : 'middle';
+}
+
+export function MomentDiagram({ beam, width, proposedJointFt, jointLabel = 'Joint', plannedJointFt, showSummary = true, testID }: Props) {
+  const margin = plannedJointFt !== undefined ? { ...baseMargin, top: 36 } : baseMargin;
+  const summary =
+    momentDiagramSummary(beam, proposedJointFt) + (plannedJointFt !== undefined ? ` The plans put the joint at ${ft(plannedJointFt)}.` : '');
   const plotBottom = VIEW_HEIGHT - margin.bottom;
   const x = scaleLinear().domain([0, beam.totalLengthFt]).range([margin.left, VIEW_WIDTH - margin.right]);
   const top = Math.max(beam.maxPositive.momentKipFt, 0);
@@ -108,8 +119,24 @@ export function MomentDiagram({ beam, width, proposedJointFt, showSummary = true
               strokeWidth={1.5}
               strokeDasharray="4 3"
             />
-            <Label x={x(proposedJointFt)} y={margin.top - 9} color={jointInNegative ? plotColors.caution : plotColors.line}>
-              {`Joint ${ft(proposedJointFt)}`}
+            <Label x={x(proposedJointFt)} y={13} anchor={anchorFor(x(proposedJointFt))} color={jointInNegative ? plotColors.caution : plotColors.line}>
+              {`${jointLabel} ${ft(proposedJointFt)}`}
+            </Label>
+          </G>
+        ) : null}
+        {plannedJointFt !== undefined ? (
+          <G>
+            <Line
+              x1={x(plannedJointFt)}
+              x2={x(plannedJointFt)}
+              y1={margin.top - 6}
+              y2={girderY}
+              stroke={plotColors.muted}
+              strokeWidth={1}
+              strokeDasharray="2 3"
+            />
+            <Label x={x(plannedJointFt)} y={27} anchor={anchorFor(x(plannedJointFt))} size={fontSize.small} color={plotColors.muted}>
+              {`On the plans ${ft(plannedJointFt)}`}
             </Label>
           </G>
         ) : null}

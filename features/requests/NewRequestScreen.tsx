@@ -6,7 +6,6 @@ import { Link, useRouter } from 'expo-router';
 import { useRef, useState } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import type { RequestBody } from '../../shared/requests/requestBody';
-import { requestTypeLabels } from '../../shared/requests/requestBody';
 import type { RequestDetail } from '../../shared/requests/types';
 import { ApiError, apiFetch } from '../api/http';
 import { Notice } from '../ui/Notice';
@@ -14,7 +13,7 @@ import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
 import { requestKeys, useCreateDraft, useMyProjects, useUpdateDraft, useUploadAttachments, useWorkflowEvent, type PickedFile } from './api';
-import { fieldFor } from './otherDeviationForm';
+import { fieldFor } from './filing/formSchema';
 import { RequestFilingForm } from './RequestFilingForm';
 
 type Step = 'save' | 'upload' | 'submit';
@@ -115,7 +114,6 @@ export function NewRequestScreen() {
     <Screen>
       <View style={styles.head}>
         <Text variant="title" accessibilityRole="header">New request</Text>
-        <Text variant="label" style={styles.type}>{requestTypeLabels.other_deviation}</Text>
         <Text variant="muted">
           A departure from the sealed plans needs approval before the work is done. It goes first to the section engineer, then to central office and the engineer of record.
         </Text>
@@ -141,7 +139,6 @@ export function NewRequestScreen() {
 
 const styles = StyleSheet.create({
   head: { gap: space.xs },
-  type: { color: colors.slate },
   failure: { gap: space.sm },
   detail: { color: colors.danger },
   link: { color: colors.slate, textDecorationLine: 'underline', fontWeight: '600' },

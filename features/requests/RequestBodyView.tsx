@@ -2,7 +2,9 @@
 // revision before it. Drafts may be half filled, so every field has a word for "not yet".
 import { StyleSheet, View } from 'react-native';
 import type { RevisionView } from '../../shared/requests/types';
-import { EngineeringCaution } from '../engineering/EngineeringCaution';
+import type { CheckLike } from '../engineering/checkFigures';
+import { EngineeringCheckView } from '../engineering/EngineeringCheckView';
+import { TypedFields } from './TypedFields';
 import { Panel } from '../ui/Panel';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
@@ -62,6 +64,7 @@ export function RequestBodyView({ revision }: { revision: RevisionView }) {
           <Field label="Contract-time impact" value={typeof b.contractTimeImpactDays === 'number' ? formatDays(b.contractTimeImpactDays) : undefined} testID="request-time-impact" />
         </View>
       </View>
+      <TypedFields body={b} />
       {changes.length > 0 ? (
         <View style={styles.changes} testID="request-changes">
           <Text variant="label">Changed since revision {revision.revision - 1}</Text>
@@ -77,27 +80,15 @@ export function RequestBodyView({ revision }: { revision: RevisionView }) {
   );
 }
 
-type Findings = { verdict?: string; findings?: unknown; engineeringVersion?: unknown };
-
-const verdictLabels: Record<string, string> = {
-  acceptable: 'The checks find the proposal acceptable.',
-  not_acceptable: 'The checks find a problem with the proposal.',
-  for_review: 'The checks leave this to the reviewer’s judgement.',
-};
-
-// Stored with the revision at submit; a request type without checks stores none.
+// Stored with the revision at submit; a request type without checks stores none. The plots are
+// drawn from the stored figures, so every desk sees what was filed.
 function EngineeringFindings({ engineering }: { engineering: unknown }) {
   if (!engineering || typeof engineering !== 'object') return null;
-  const e = engineering as Findings;
-  const findings = Array.isArray(e.findings) ? e.findings.filter((f): f is string => typeof f === 'string') : [];
+  const e = engineering as CheckLike;
   return (
     <View style={styles.changes} testID="request-engineering">
       <Text variant="label">Engineering checks{typeof e.engineeringVersion === 'string' ? ` (version ${e.engineeringVersion}, run at submit)` : ''}</Text>
-      {e.verdict ? <Text>{verdictLabels[e.verdict] ?? e.verdict}</Text> : null}
-      {findings.map((f, i) => (
-        <Text key={i} variant="muted">• {f}</Text>
-      ))}
-      <EngineeringCaution />
+      <EngineeringCheckView check={e} stored testID="request-check" />
     </View>
   );
 }

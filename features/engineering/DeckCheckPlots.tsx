@@ -1,0 +1,42 @@
+// A deck placement check drawn: the dead-load moment diagram with its negative regions, and the
+// placements in order along the deck.
+import { View, StyleSheet } from 'react-native';
+import { Text } from '../ui/Text';
+import { space } from '../ui/theme';
+import type { DeckFigures } from './checkFigures';
+import { Facts } from './Facts';
+import { ft } from './format';
+import { MomentDiagram } from './MomentDiagram';
+import { PlacementSequencePlot } from './PlacementSequencePlot';
+
+export function DeckCheckPlots({ figures, width }: { figures: DeckFigures; width: number }) {
+  const { plan, beam, emergencyJointAtFt } = figures;
+  const single = plan.singlePlacement;
+  return (
+    <View style={styles.wrap}>
+      {beam ? (
+        <View style={styles.plot}>
+          <Text variant="label">Moment under the wet deck concrete ({plan.deadLoadKipPerFt.toFixed(2)} kip/ft)</Text>
+          <MomentDiagram beam={beam} width={width} proposedJointFt={emergencyJointAtFt} jointLabel="Emergency joint" testID="engineering-moment-diagram" />
+        </View>
+      ) : null}
+      <View style={styles.plot}>
+        <Text variant="label">Staged placement order</Text>
+        <PlacementSequencePlot plan={plan} width={width} showEmergencyJointZones testID="engineering-placement-plot" />
+      </View>
+      <Facts
+        rows={[
+          ['Placements if staged', String(plan.segments.length)],
+          ['Whole deck in one placement', `${single.volumeCy.toFixed(0)} cy in ${single.durationHr.toFixed(1)} h`],
+          ['Initial set needed for one placement', `${single.minInitialSetHr.toFixed(1)} h or more`],
+          ...(emergencyJointAtFt !== undefined ? ([['Emergency joint', ft(emergencyJointAtFt)]] as [string, string][]) : []),
+        ]}
+      />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.lg },
+  plot: { gap: space.xs },
+});

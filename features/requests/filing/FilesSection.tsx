@@ -1,0 +1,69 @@
+// The files that go with the request. A seal substitution cannot be filed without the
+// substitute's data sheet, so the form says so here and before it sends anything.
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { uploadLimits } from '../../../shared/requests/filing';
+import { Button } from '../../ui/Button';
+import { FieldError } from '../../ui/Choice';
+import { Text } from '../../ui/Text';
+import { colors, radius, space } from '../../ui/theme';
+import type { PickedFile } from '../api';
+import { formatBytes } from '../format';
+import { pickFiles } from '../pickFiles';
+
+type Props = {
+  files: PickedFile[];
+  onChange: (files: PickedFile[]) => void;
+  savedFiles: ReadonlySet<PickedFile>;
+  needsDataSheet: boolean;
+  // Set by the form when it refused to file for want of a file.
+  missing?: string | null;
+};
+
+export function FilesSection({ files, onChange, savedFiles, needsDataSheet, missing }: Props) {
+  const [fileError, setFileError] = useState<string | null>(null);
+
+  async function addFiles() {
+    const picked = await pickFiles();
+    const tooBig = picked.filter((f) => f.size > uploadLimits.maxFileBytes);
+    const empty = picked.filter((f) => f.size === 0);
+    const accepted = picked.filter((f) => f.size > 0 && f.size <= uploadLimits.maxFileBytes);
+    onChange([...files, ...accepted].slice(0, uploadLimits.maxFilesPerRequest));
+    const problems = [
+      ...tooBig.map((f) => `"${f.name}" is over the ${formatBytes(uploadLimits.maxFileBytes)} limit.`),
+      ...empty.map((f) => `"${f.name}" is empty.`),
+      files.length + accepted.length > uploadLimits.maxFilesPerRequest ? `At most ${uploadLimits.maxFilesPerRequest} files per request.` : '',
+    ].filter(Boolean);
+    setFileError(problems.length ? problems.join(' ') : null);
+  }
+
+  return (
+    <View style={styles.section}>
+      <Text variant="heading" accessibilityRole="header">Drawings, photos and documents</Text>
+      <Text variant="muted">
+        {needsDataSheet ? 'The substitute seal’s data sheet is required. ' : ''}
+        Marked-up plan sheets, sketches or photos that show the change. Up to {uploadLimits.maxFilesPerRequest} files, {formatBytes(uploadLimits.maxFileBytes)} each.
+      </Text>
+      {files.map((f, i) => (
+        <View key={`${f.name}-${i}`} style={styles.fileRow} testID="filing-file">
+          <Text style={styles.fileName} numberOfLines={1}>{f.name}</Text>
+          <Text variant="muted">{formatBytes(f.size)}</Text>
+          {savedFiles.has(f) ? (
+            <Text variant="muted" style={styles.saved}>Saved with the draft</Text>
+          ) : (
+            <Button kind="quiet" label="Remove" onPress={() => onChange(files.filter((_, j) => j !== i))} />
+          )}
+        </View>
+      ))}
+      <FieldError message={fileError ?? (files.length === 0 ? (missing ?? undefined) : undefined)} testID="filing-files-error" />
+      <Button kind="secondary" label="Add files" onPress={addFiles} testID="filing-add-files" />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  section: { gap: space.lg },
+  fileRow: { flexDirection: 'row', alignItems: 'center', gap: space.md, backgroundColor: colors.surface, borderRadius: radius, paddingLeft: space.md, minHeight: 44 },
+  fileName: { flex: 1 },
+  saved: { paddingRight: space.md },
+});
