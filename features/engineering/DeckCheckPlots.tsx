@@ -22,8 +22,9 @@ export function DeckCheckPlots({ figures, width }: { figures: DeckFigures; width
       ) : null}
       <View style={styles.plot}>
         <Text variant="label">Staged placement order</Text>
-        <PlacementSequencePlot plan={plan} width={width} showEmergencyJointZones testID="engineering-placement-plot" />
+        <PlacementSequencePlot plan={plan} width={width} showEmergencyJointZones showSummary={false} testID="engineering-placement-plot" />
       </View>
+      <Facts rows={plan.segments.map((seg) => [`${seg.order}. ${seg.sign === 'negative' ? 'Over a pier' : 'Positive moment'}`, `${ft(seg.fromFt, 0)}–${ft(seg.toFt, 0)} · ${seg.volumeCy.toFixed(0)} cy · ${seg.durationHr.toFixed(1)} h`])} testID="engineering-placements" />
       <Facts
         rows={[
           ['Placements if staged', String(plan.segments.length)],

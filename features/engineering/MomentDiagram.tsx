@@ -7,7 +7,7 @@ import { area, line } from 'd3-shape';
 import type { ContinuousBeamResult } from '../../shared/engineering';
 import { fontSize, heightFor, plotColors, VIEW_WIDTH, viewBoxFor } from './plotStyle';
 import { Label, PlotSummary, SupportTriangle } from './PlotParts';
-import { ft, kipFt } from './format';
+import { ft } from './format';
 import { momentDiagramSummary } from './summaries';
 
 type Props = {
@@ -86,14 +86,14 @@ export function MomentDiagram({ beam, width, proposedJointFt, jointLabel = 'Join
         {curve ? <Path d={curve} stroke={plotColors.line} strokeWidth={2} fill="none" /> : null}
 
         <Label x={margin.left - 6} y={y(top) + 4} anchor="end" size={fontSize.small}>
-          {kipFt(top)}
+          {String(Math.round(top))}
         </Label>
         <Label x={margin.left - 6} y={y(0) + 4} anchor="end" size={fontSize.small}>
           0
         </Label>
         {bottom < 0 ? (
           <Label x={margin.left - 6} y={y(bottom) + 4} anchor="end" size={fontSize.small} color={plotColors.caution}>
-            {kipFt(bottom)}
+            {String(Math.round(bottom))}
           </Label>
         ) : null}
 

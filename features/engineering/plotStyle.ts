@@ -18,7 +18,8 @@ export const plotFont = 'WorkSans_400Regular' satisfies (typeof fonts)['regular'
 /** Width of the drawing coordinate space; a 390-px phone shows it at one unit per pixel. */
 export const VIEW_WIDTH = 390;
 
-export const fontSize = { label: 11, small: 9.5, title: 12 } as const;
+// Sized for a plot drawn about 330 px wide inside a panel on a phone, where it shrinks by a sixth.
+export const fontSize = { label: 12, small: 10.5, title: 13 } as const;
 
 export function viewBoxFor(viewHeight: number): string {
   return `0 0 ${VIEW_WIDTH} ${viewHeight}`;

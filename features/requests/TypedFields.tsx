@@ -24,8 +24,8 @@ export function TypedFields({ body }: { body: unknown }) {
 }
 
 const styles = StyleSheet.create({
-  list: { gap: space.xs, borderTopWidth: 1, borderTopColor: colors.line, paddingTop: space.md },
-  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, columnGap: space.md },
+  list: { gap: space.sm, borderTopWidth: 1, borderTopColor: colors.line, paddingTop: space.md },
+  row: { flexDirection: 'row', flexWrap: 'wrap', rowGap: 0, columnGap: space.md },
   label: { color: colors.inkMuted, flexBasis: 200, flexGrow: 1 },
   value: { flexBasis: 200, flexGrow: 2 },
 });

@@ -5,12 +5,11 @@ import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoEmail, demoPassword } from '../../server/demo/demoScenario';
+import { demoEmail } from '../../server/demo/demoScenario';
 import { launchChromium } from '../support/browser';
-import { artifactsDir, testServerEnv } from '../support/testSettings';
+import { artifactsDir } from '../support/testSettings';
+import { base, screenshotWhole, signInAs } from './helpers';
 
-const env = testServerEnv('e2e');
-const base = env.PUBLIC_URL;
 const shots = join(artifactsDir(), 'screenshots');
 
 const viewports = [
@@ -19,15 +18,6 @@ const viewports = [
 ];
 
 type CaughtMail = { to: string; subject: string; text: string; sentAt: string };
-
-async function signInAs(page: Page, role: 'contractor' | 'section_engineer') {
-  await page.goto(`${base}/`);
-  await page.waitForURL(/\/sign-in/);
-  await page.getByTestId('sign-in-email').fill(demoEmail(role));
-  await page.getByTestId('sign-in-password').fill(demoPassword);
-  await page.getByTestId('sign-in-submit').click();
-  await expect.poll(() => page.getByTestId('shell-actor').textContent()).toContain(role === 'contractor' ? 'Contractor' : 'Section engineer');
-}
 
 async function mailFor(to: string, subjectPart: string): Promise<CaughtMail | undefined> {
   const deadline = Date.now() + 15_000;
@@ -56,22 +46,6 @@ async function fillOtherDeviation(page: Page, title: string) {
   await page.getByTestId('filing-add-files').click();
   await (await chooser).setFiles({ name: 'D-3 drain outlet markup.pdf', mimeType: 'application/pdf', buffer: Buffer.from('%PDF-1.4\n% sheet D-3\n%%EOF\n') });
   await expect.poll(() => page.getByTestId('filing-file').count()).toBe(1);
-}
-
-// The app scrolls inside its own view, not the document, so a full-page shot would stop at the
-// window: grow the window to the content for the shot, then put it back.
-async function screenshotWhole(page: Page, vp: { width: number; height: number }, path: string) {
-  // A string, because this file is checked without the DOM's types.
-  const contentHeight = await page.evaluate<number>(`(() => {
-    let tallest = document.documentElement.scrollHeight;
-    for (const el of document.querySelectorAll('div')) {
-      if (el.scrollHeight > el.clientHeight) tallest = Math.max(tallest, el.scrollHeight + el.getBoundingClientRect().top);
-    }
-    return Math.ceil(tallest);
-  })()`);
-  await page.setViewportSize({ width: vp.width, height: Math.max(vp.height, Math.min(contentHeight, 8000)) });
-  await page.screenshot({ path });
-  await page.setViewportSize({ width: vp.width, height: vp.height });
 }
 
 describe('filing a request through the web app', () => {

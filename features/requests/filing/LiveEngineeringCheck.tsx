@@ -40,7 +40,7 @@ export function LiveEngineeringCheck({ control }: { control: FilingControl }) {
 }
 
 const styles = StyleSheet.create({
-  box: { gap: space.md, borderWidth: 1, borderColor: colors.slate, borderTopWidth: 4, borderRadius: radius, padding: space.lg, backgroundColor: colors.surface },
+  box: { gap: space.md, borderWidth: 1, borderColor: colors.slate, borderTopWidth: 4, borderRadius: radius, padding: space.md, backgroundColor: colors.surface },
   waiting: { color: colors.inkMuted },
   refused: { color: colors.caution },
 });

@@ -1,0 +1,111 @@
+// A deck placement change through the browser: the contractor sees the engineering check and its
+// moment diagram while typing, files it, and the request shows the check stored at submit with
+// the same plots. Phone size, with one wide shot of the filed request and the demo joint request.
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchChromium } from '../support/browser';
+import { artifactsDir } from '../support/testSettings';
+import { screenshotWhole, signInAs } from './helpers';
+
+const shots = join(artifactsDir(), 'screenshots');
+const phone = { width: 390, height: 844 };
+const wide = { width: 1440, height: 900 };
+const caution = 'engineer of record';
+
+async function fillDeckPlacement(page: Page, title: string) {
+  await page.getByTestId('filing-title').fill(title);
+  await page.getByTestId('filing-location').fill('Full deck, abutment 1 to abutment 2');
+  await page.getByTestId('filing-spans').fill('95, 120, 95');
+  await page.getByTestId('filing-deck-width').fill('46');
+  await page.getByTestId('filing-slab-thickness').fill('8.5');
+  await page.getByTestId('filing-haunch').fill('0.12');
+  await page.getByTestId('filing-planned-sequence').fill('Five stages: positive-moment lengths first, then the pier lengths (sheet S-6).');
+  await page.getByTestId('filing-sequence-single_placement').click();
+  await page.getByTestId('filing-proposed-sequence').fill('One placement from abutment 1 toward abutment 2.');
+  await page.getByTestId('filing-placement-rate').fill('55');
+  await page.getByTestId('filing-equipment').fill('Two boom pumps, one finishing machine');
+}
+
+async function fillRetarder(page: Page) {
+  await page.getByTestId('filing-retarder').click();
+  await page.getByTestId('filing-retarder-type-D').click();
+  await page.getByTestId('filing-retarder-product').fill('Type D retarder, trial batch TB-7');
+  await page.getByTestId('filing-initial-set').fill('11.5');
+}
+
+async function fillCommonRest(page: Page) {
+  await page.getByTestId('filing-reason').fill('Two pumps are on hand for the whole day; one placement removes the joints over the piers.');
+  await page.getByTestId('filing-proposed-change').fill('Place the whole deck at once with Type D retarded concrete instead of the staged sequence.');
+  await page.getByTestId('filing-needed-by').fill('2027-05-10');
+  await page.getByTestId('filing-cost-none').click();
+  await page.getByTestId('filing-time-impact').fill('-5');
+}
+
+describe('engineering checks in the web app', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    mkdirSync(shots, { recursive: true });
+    browser = await launchChromium();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('contractor sees the live deck check, files it, and the request keeps the check with its plots', async () => {
+    const context = await browser.newContext({ viewport: phone });
+    const page = await context.newPage();
+    const shot = (name: string, vp = phone) => screenshotWhole(page, vp, join(shots, name));
+    const title = 'Place the three-span deck in one pour (e2e)';
+
+    await signInAs(page, 'contractor');
+    await page.getByTestId('desk-new-request').click();
+    await page.waitForURL(/\/requests\/new/);
+    await page.getByTestId('filing-type-deck_placement_change').click();
+
+    await fillDeckPlacement(page, title);
+    // A single placement without a retarder: the check says no, and why.
+    const live = page.getByTestId('filing-live-check');
+    await expect.poll(() => page.getByTestId('filing-check-verdict').textContent()).toBe('Not acceptable by these checks');
+    expect(await live.textContent()).toContain('no retarder or set-time test is given');
+    await shot('eng-phone-1-live-check-refused.png');
+
+    await fillRetarder(page);
+    await expect.poll(() => page.getByTestId('filing-check-verdict').textContent()).toBe('Acceptable by these checks');
+    expect(await live.getByTestId('engineering-moment-diagram').count()).toBe(1);
+    expect(await live.getByTestId('engineering-placement-plot').count()).toBe(1);
+    expect(await live.getByTestId('engineering-moment-diagram').getAttribute('aria-label')).toContain('Moment diagram of a 3-span girder, 310.0 ft long');
+    expect(await live.textContent()).toContain(caution);
+    await fillCommonRest(page);
+    await shot('eng-phone-2-live-check.png');
+
+    await page.getByTestId('filing-submit').click();
+    await page.waitForURL(/\/requests\/[0-9a-f-]{36}(\?filed=1)?$/);
+    await expect.poll(() => page.getByTestId('request-filed').count()).toBe(1);
+    const stored = page.getByTestId('request-engineering');
+    await expect.poll(() => stored.textContent()).toContain('run at submit');
+    expect(await page.getByTestId('request-check-verdict').textContent()).toBe('Acceptable by these checks');
+    await expect.poll(() => stored.getByTestId('engineering-moment-diagram').count()).toBe(1);
+    expect(await stored.getByTestId('engineering-placement-plot').count()).toBe(1);
+    expect(await stored.textContent()).toContain(caution);
+    expect(await page.getByTestId('request-typed-fields').textContent()).toContain('95, 120, 95');
+    await shot('eng-phone-3-filed-request.png');
+    await page.setViewportSize(wide);
+    // The detail changes to two columns on a wide screen; let it lay out before measuring.
+    await expect.poll(() => page.getByTestId('request-trail').count()).toBe(1);
+    await page.waitForTimeout(300);
+    await shot('eng-wide-4-filed-request.png', wide);
+
+    // The demo joint relocation, filed by the seed: its stored check marks both joints.
+    await page.goto(page.url().replace(/\/requests\/.*/, '/'));
+    const card = page.getByTestId('request-card').filter({ hasText: 'Move deck construction joint CJ-2' }).first();
+    await card.click();
+    await page.waitForURL(/\/requests\/[0-9a-f-]{36}$/);
+    const jointCheck = page.getByTestId('request-engineering');
+    await expect.poll(() => jointCheck.getByTestId('engineering-moment-diagram').count()).toBe(1);
+    expect(await jointCheck.getByTestId('engineering-moment-diagram').getAttribute('aria-label')).toContain('The plans put the joint at 125.0 ft');
+    await shot('eng-wide-5-demo-joint.png', wide);
+    await context.close();
+  });
+});

@@ -1,0 +1,32 @@
+// What the browser tests share: signing in as a demo person and whole-page screenshots.
+import type { Page } from 'playwright-core';
+import { expect } from 'vitest';
+import { demoEmail, demoPassword } from '../../server/demo/demoScenario';
+import { testServerEnv } from '../support/testSettings';
+
+export const base = testServerEnv('e2e').PUBLIC_URL;
+
+export async function signInAs(page: Page, role: 'contractor' | 'section_engineer') {
+  await page.goto(`${base}/`);
+  await page.waitForURL(/\/sign-in/);
+  await page.getByTestId('sign-in-email').fill(demoEmail(role));
+  await page.getByTestId('sign-in-password').fill(demoPassword);
+  await page.getByTestId('sign-in-submit').click();
+  await expect.poll(() => page.getByTestId('shell-actor').textContent()).toContain(role === 'contractor' ? 'Contractor' : 'Section engineer');
+}
+
+// The app scrolls inside its own view, not the document, so a full-page shot would stop at the
+// window: grow the window to the content for the shot, then put it back.
+export async function screenshotWhole(page: Page, vp: { width: number; height: number }, path: string) {
+  // A string, because this file is checked without the DOM's types.
+  const contentHeight = await page.evaluate<number>(`(() => {
+    let tallest = document.documentElement.scrollHeight;
+    for (const el of document.querySelectorAll('div')) {
+      if (el.scrollHeight > el.clientHeight) tallest = Math.max(tallest, el.scrollHeight + el.getBoundingClientRect().top);
+    }
+    return Math.ceil(tallest);
+  })()`);
+  await page.setViewportSize({ width: vp.width, height: Math.max(vp.height, Math.min(contentHeight, 8000)) });
+  await page.screenshot({ path });
+  await page.setViewportSize({ width: vp.width, height: vp.height });
+}
