@@ -8,6 +8,9 @@ import { Facts } from './Facts';
 import { ft } from './format';
 import { MomentDiagram } from './MomentDiagram';
 import { PlacementSequencePlot } from './PlacementSequencePlot';
+import { Inset } from './Inset';
+import { PlotSummary } from './PlotParts';
+import { momentDiagramSummary } from './summaries';
 
 export function DeckCheckPlots({ figures, width }: { figures: DeckFigures; width: number }) {
   const { plan, beam, emergencyJointAtFt } = figures;
@@ -16,15 +19,23 @@ export function DeckCheckPlots({ figures, width }: { figures: DeckFigures; width
     <View style={styles.wrap}>
       {beam ? (
         <View style={styles.plot}>
-          <Text variant="label">Moment under the wet deck concrete ({plan.deadLoadKipPerFt.toFixed(2)} kip/ft)</Text>
-          <MomentDiagram beam={beam} width={width} proposedJointFt={emergencyJointAtFt} jointLabel="Emergency joint" testID="engineering-moment-diagram" />
+          <Inset>
+            <Text variant="label">Moment under the wet deck concrete ({plan.deadLoadKipPerFt.toFixed(2)} kip/ft)</Text>
+          </Inset>
+          <MomentDiagram beam={beam} width={width} proposedJointFt={emergencyJointAtFt} jointLabel="Emergency joint" showSummary={false} testID="engineering-moment-diagram" />
+          <Inset>
+            <PlotSummary>{momentDiagramSummary(beam, emergencyJointAtFt)}</PlotSummary>
+          </Inset>
         </View>
       ) : null}
       <View style={styles.plot}>
-        <Text variant="label">Staged placement order</Text>
+        <Inset>
+          <Text variant="label">Staged placement order</Text>
+        </Inset>
         <PlacementSequencePlot plan={plan} width={width} showEmergencyJointZones showSummary={false} testID="engineering-placement-plot" />
       </View>
-      <Facts rows={plan.segments.map((seg) => [`${seg.order}. ${seg.sign === 'negative' ? 'Over a pier' : 'Positive moment'}`, `${ft(seg.fromFt, 0)}–${ft(seg.toFt, 0)} · ${seg.volumeCy.toFixed(0)} cy · ${seg.durationHr.toFixed(1)} h`])} testID="engineering-placements" />
+      <Inset>
+      <Facts rows={plan.segments.map((seg) => [`${seg.order}. ${seg.sign === 'negative' ? 'Over a pier' : 'Positive moment'}`, `${seg.fromFt.toFixed(0)}–${ft(seg.toFt, 0)} · ${seg.volumeCy.toFixed(0)} cy · ${seg.durationHr.toFixed(1)} h`])} testID="engineering-placements" />
       <Facts
         rows={[
           ['Placements if staged', String(plan.segments.length)],
@@ -33,6 +44,7 @@ export function DeckCheckPlots({ figures, width }: { figures: DeckFigures; width
           ...(emergencyJointAtFt !== undefined ? ([['Emergency joint', ft(emergencyJointAtFt)]] as [string, string][]) : []),
         ]}
       />
+      </Inset>
     </View>
   );
 }

@@ -1,12 +1,13 @@
 // One engineering check as a reviewer reads it: the verdict, the findings, the plots of its own
 // figures and the caution. The form shows a live check as it is typed; a request shows the one
 // stored at submit, so everyone sees the figures that were filed.
-import { StyleSheet, View } from 'react-native';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { Text } from '../ui/Text';
 import { radius, space } from '../ui/theme';
 import { deckFigures, findingsOf, jointFigures, sealFigures, type CheckLike } from './checkFigures';
 import { DeckCheckPlots } from './DeckCheckPlots';
 import { EngineeringCaution } from './EngineeringCaution';
+import { PlotInset } from './Inset';
 import { JointCheckPlots } from './JointCheckPlots';
 import { SealCheckPlots } from './SealCheckPlots';
 import { useMeasuredWidth } from './useMeasuredWidth';
@@ -29,7 +30,11 @@ function Plots({ check, width }: { check: CheckLike; width: number }) {
   return null;
 }
 
-export function EngineeringCheckView({ check, stored = false, testID }: { check: CheckLike; stored?: boolean; testID?: string }) {
+// `bleed` is the padding of the box around the view: on a phone the plots reach out over it,
+// since every pixel of width is lettering a site reader can read.
+export function EngineeringCheckView({ check, stored = false, bleed = 0, testID }: { check: CheckLike; stored?: boolean; bleed?: number; testID?: string }) {
+  const { width: windowWidth } = useWindowDimensions();
+  const outward = windowWidth < 600 ? bleed : 0;
   const [width, onLayout] = useMeasuredWidth();
   const verdict = verdictOf(check.verdict);
   const findings = findingsOf(check);
@@ -51,8 +56,10 @@ export function EngineeringCheckView({ check, stored = false, testID }: { check:
           ))}
         </View>
       ) : null}
-      <View onLayout={onLayout}>
-        <Plots check={check} width={width} />
+      <View onLayout={onLayout} style={outward ? { marginHorizontal: -outward } : undefined}>
+        <PlotInset.Provider value={outward}>
+          <Plots check={check} width={width} />
+        </PlotInset.Provider>
       </View>
       <EngineeringCaution version={stored ? version : undefined} showVersion={!stored} />
     </View>

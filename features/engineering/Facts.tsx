@@ -21,5 +21,5 @@ const styles = StyleSheet.create({
   list: { gap: 2 },
   row: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', gap: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line, paddingVertical: 4 },
   label: { flexShrink: 1 },
-  value: { fontVariant: ['tabular-nums'], textAlign: 'right' },
+  value: { fontVariant: ['tabular-nums'], textAlign: 'right', flexGrow: 1 },
 });

@@ -6,7 +6,10 @@ import { space } from '../ui/theme';
 import type { JointFigures } from './checkFigures';
 import { Facts } from './Facts';
 import { ft, kipFt } from './format';
+import { Inset } from './Inset';
 import { MomentDiagram } from './MomentDiagram';
+import { PlotSummary } from './PlotParts';
+import { momentDiagramSummary } from './summaries';
 
 export function JointCheckPlots({ figures, width }: { figures: JointFigures; width: number }) {
   const rows: [string, string][] = [['Proposed joint', ft(figures.jointAtFt)]];
@@ -17,12 +20,26 @@ export function JointCheckPlots({ figures, width }: { figures: JointFigures; wid
     <View style={styles.wrap}>
       {figures.beam ? (
         <View style={styles.plot}>
-          <Text variant="label">Where the joint falls on the moment diagram</Text>
-          <MomentDiagram beam={figures.beam} width={width} proposedJointFt={figures.jointAtFt} plannedJointFt={figures.plannedAtFt} testID="engineering-moment-diagram" />
-          <Text variant="muted">Drawn for a uniform load of 1 kip/ft: the regions do not depend on the size of the load.</Text>
+          <Inset>
+            <Text variant="label">Where the joint falls on the moment diagram</Text>
+          </Inset>
+          <MomentDiagram
+            beam={figures.beam}
+            width={width}
+            proposedJointFt={figures.jointAtFt}
+            plannedJointFt={figures.plannedAtFt}
+            showSummary={false}
+            testID="engineering-moment-diagram"
+          />
+          <Inset>
+            <PlotSummary>{momentDiagramSummary(figures.beam, figures.jointAtFt) + (figures.plannedAtFt !== undefined ? ` The plans put the joint at ${ft(figures.plannedAtFt)}.` : '')}</PlotSummary>
+            <Text variant="muted">Drawn for a uniform load of 1 kip/ft: the regions do not depend on the size of the load.</Text>
+          </Inset>
         </View>
       ) : null}
-      <Facts rows={rows} />
+      <Inset>
+        <Facts rows={rows} />
+      </Inset>
     </View>
   );
 }

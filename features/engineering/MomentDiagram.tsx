@@ -64,7 +64,10 @@ export function MomentDiagram({ beam, width, proposedJointFt, jointLabel = 'Join
   const jointInNegative =
     proposedJointFt !== undefined &&
     beam.regions.some((r) => r.sign === 'negative' && proposedJointFt > r.fromFt && proposedJointFt < r.toFt);
-  const labelInflections = beam.inflectionPointsFt.length <= 4;
+  const labelInflections = beam.inflectionPointsFt.length <= 8;
+  // An inflection point's label sits below the zero line on the side away from the negative
+  // region it bounds, where the curve is above the line, so the label never crosses the curve.
+  const opensNegative = (ip: number) => beam.regions.some((r) => r.sign === 'negative' && Math.abs(r.fromFt - ip) <= 1e-6 * beam.totalLengthFt);
 
   return (
     <View testID={testID} accessible accessibilityRole="image" accessibilityLabel={summary}>
@@ -97,12 +100,18 @@ export function MomentDiagram({ beam, width, proposedJointFt, jointLabel = 'Join
           </Label>
         ) : null}
 
-        {beam.inflectionPointsFt.map((ip, i) => (
+        {beam.inflectionPointsFt.map((ip) => (
           <G key={`ip-${ip}`}>
             <Circle cx={x(ip)} cy={y(0)} r={3} fill={plotColors.surface} stroke={plotColors.caution} strokeWidth={1.5} />
             {labelInflections ? (
-              <Label x={x(ip)} y={y(0) + (i % 2 === 0 ? -9 : 17)} size={fontSize.small} color={plotColors.caution}>
-                {ft(ip, 0)}
+              <Label
+                x={x(ip) + (opensNegative(ip) ? -5 : 5)}
+                y={y(0) + 14}
+                anchor={opensNegative(ip) ? 'end' : 'start'}
+                size={fontSize.small}
+                color={plotColors.caution}
+              >
+                {ip.toFixed(0)}
               </Label>
             ) : null}
           </G>

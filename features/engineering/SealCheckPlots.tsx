@@ -7,7 +7,10 @@ import { space } from '../ui/theme';
 import type { SealFigures } from './checkFigures';
 import { Facts } from './Facts';
 import { inches, listOf } from './format';
+import { Inset } from './Inset';
 import { OpeningTemperaturePlot } from './OpeningTemperaturePlot';
+import { PlotSummary } from './PlotParts';
+import { openingTemperatureSummary } from './summaries';
 
 export function SealCheckPlots({ figures, width }: { figures: SealFigures; width: number }) {
   const rows: [string, string][] = [];
@@ -21,16 +24,25 @@ export function SealCheckPlots({ figures, width }: { figures: SealFigures; width
     <View style={styles.wrap}>
       {figures.gap ? (
         <View style={styles.plot}>
-          <Text variant="label">Opening against deck temperature</Text>
-          <OpeningTemperaturePlot gap={figures.gap} width={width} testID="engineering-opening-plot" />
+          <Inset>
+            <Text variant="label">Opening against deck temperature</Text>
+          </Inset>
+          <OpeningTemperaturePlot gap={figures.gap} width={width} showSummary={false} testID="engineering-opening-plot" />
+          <Inset>
+            <PlotSummary>{openingTemperatureSummary(figures.gap)}</PlotSummary>
+          </Inset>
         </View>
       ) : (
-        <Text variant="muted">Give the opening on the plans and its temperature to see the opening to set at installation.</Text>
+        <Inset>
+          <Text variant="muted">Give the opening on the plans and its temperature to see the opening to set at installation.</Text>
+        </Inset>
       )}
-      <Facts rows={rows} testID="engineering-seal-facts" />
-      {figures.suitableFamilies.length > 0 ? (
-        <Text variant="muted">Families that suit this movement: {listOf(figures.suitableFamilies.map((k) => sealKindLabels[k] ?? k))}.</Text>
-      ) : null}
+      <Inset>
+        <Facts rows={rows} testID="engineering-seal-facts" />
+        {figures.suitableFamilies.length > 0 ? (
+          <Text variant="muted">Families that suit this movement: {listOf(figures.suitableFamilies.map((k) => sealKindLabels[k] ?? k))}.</Text>
+        ) : null}
+      </Inset>
     </View>
   );
 }

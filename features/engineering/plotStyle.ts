@@ -19,7 +19,7 @@ export const plotFont = 'WorkSans_400Regular' satisfies (typeof fonts)['regular'
 export const VIEW_WIDTH = 390;
 
 // Sized for a plot drawn about 330 px wide inside a panel on a phone, where it shrinks by a sixth.
-export const fontSize = { label: 12, small: 10.5, title: 13 } as const;
+export const fontSize = { label: 13, small: 11.5, title: 14 } as const;
 
 export function viewBoxFor(viewHeight: number): string {
   return `0 0 ${VIEW_WIDTH} ${viewHeight}`;

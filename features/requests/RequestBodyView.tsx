@@ -88,7 +88,7 @@ function EngineeringFindings({ engineering }: { engineering: unknown }) {
   return (
     <View style={styles.changes} testID="request-engineering">
       <Text variant="label">Engineering checks{typeof e.engineeringVersion === 'string' ? ` (version ${e.engineeringVersion}, run at submit)` : ''}</Text>
-      <EngineeringCheckView check={e} stored testID="request-check" />
+      <EngineeringCheckView check={e} stored bleed={space.lg} testID="request-check" />
     </View>
   );
 }

@@ -108,4 +108,39 @@ describe('engineering checks in the web app', () => {
     await shot('eng-wide-5-demo-joint.png', wide);
     await context.close();
   });
+
+  it('the seal substitution check draws the opening plot and will not file without the data sheet', async () => {
+    const context = await browser.newContext({ viewport: phone });
+    const page = await context.newPage();
+    await signInAs(page, 'contractor');
+    await page.getByTestId('desk-new-request').click();
+    await page.waitForURL(/\/requests\/new/);
+    await page.getByTestId('filing-type-joint_seal_substitution').click();
+    await page.getByTestId('filing-joint-location').fill('Abutment 2');
+    await page.getByTestId('filing-specified-kind-strip_seal').click();
+    await page.getByTestId('filing-specified-capacity').fill('4');
+    await page.getByTestId('filing-specified-min').fill('0.5');
+    await page.getByTestId('filing-specified-max').fill('4.5');
+    await page.getByTestId('filing-substitute-kind-compression_seal').click();
+    await page.getByTestId('filing-substitute-capacity').fill('2');
+    await page.getByTestId('filing-substitute-min').fill('1');
+    await page.getByTestId('filing-substitute-max').fill('3');
+    await page.getByTestId('filing-contributing-length').fill('300');
+    await page.getByTestId('filing-material-concrete').click();
+    await page.getByTestId('filing-climate-moderate').click();
+    await page.getByTestId('filing-install-temp').fill('64');
+    await page.getByTestId('filing-gap-reference').fill('2');
+    await page.getByTestId('filing-reference-temp').fill('60');
+
+    const live = page.getByTestId('filing-live-check');
+    await expect.poll(() => page.getByTestId('filing-check-verdict').textContent()).toBe('Not acceptable by these checks');
+    expect(await live.getByTestId('engineering-opening-plot').count()).toBe(1);
+    expect(await page.getByTestId('engineering-seal-facts').textContent()).toContain('compression seal');
+    expect(await live.textContent()).toContain(caution);
+
+    await page.getByTestId('filing-submit').click();
+    await expect.poll(() => page.getByTestId('filing-needs-attention').count()).toBe(1);
+    await screenshotWhole(page, phone, join(shots, 'eng-phone-6-seal-check.png'));
+    await context.close();
+  });
 });

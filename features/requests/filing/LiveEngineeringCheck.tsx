@@ -28,7 +28,7 @@ export function LiveEngineeringCheck({ control }: { control: FilingControl }) {
       <Text variant="heading" accessibilityRole="header">Engineering check</Text>
       <Text variant="muted">Worked out from the figures above as you type. The server works it out again when the request is filed and keeps it with the request.</Text>
       {live.state === 'ready' ? (
-        <EngineeringCheckView check={live.check} testID="filing-check" />
+        <EngineeringCheckView check={live.check} bleed={space.md} testID="filing-check" />
       ) : (
         <>
           <Text style={live.state === 'refused' ? styles.refused : styles.waiting} testID="filing-check-hint">{live.hint}</Text>
