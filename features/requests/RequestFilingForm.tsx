@@ -65,14 +65,19 @@ export function RequestFilingForm({ projects, busy, progress, projectLocked, sav
     setFilesMissing(null);
   }
 
-  const submit = handleSubmit((body) => {
-    if (body.type === 'joint_seal_substitution' && files.length === 0) {
-      setFilesMissing(dataSheetMissing);
-      return;
-    }
-    setFilesMissing(null);
-    onSubmit(body, files);
-  });
+  // Said at every press, not only once the rest is right, so the missing sheet is not a surprise at the end.
+  const dataSheetLacking = () => type === 'joint_seal_substitution' && files.length === 0;
+  const submit = handleSubmit(
+    (body) => {
+      if (dataSheetLacking()) {
+        setFilesMissing(dataSheetMissing);
+        return;
+      }
+      setFilesMissing(null);
+      onSubmit(body, files);
+    },
+    () => setFilesMissing(dataSheetLacking() ? dataSheetMissing : null),
+  );
 
   const hasErrors = (Object.keys(errors).length > 0 && formState.isSubmitted) || filesMissing !== null;
 

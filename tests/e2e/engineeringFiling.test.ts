@@ -140,6 +140,7 @@ describe('engineering checks in the web app', () => {
 
     await page.getByTestId('filing-submit').click();
     await expect.poll(() => page.getByTestId('filing-needs-attention').count()).toBe(1);
+    expect(await page.getByTestId('filing-files-error').textContent()).toContain('data sheet');
     await screenshotWhole(page, phone, join(shots, 'eng-phone-6-seal-check.png'));
     await context.close();
   });

@@ -22,6 +22,10 @@ const labels = new Map(bodyFieldLabels);
 
 export function liveCheckFor(values: FilingFormValues): LiveCheck {
   if (values.type === 'other_deviation') return { state: 'none' };
+  // Without spans and a station the check has nothing to draw; say what it needs instead of a verdict.
+  if (values.type === 'construction_joint_relocation' && (values.spansFt.trim() === '' || values.proposedLocation.atFt.trim() === '')) {
+    return { state: 'waiting', hint: 'Give the span lengths and the proposed joint station to check the joint against the moment diagram; without them the reviewers judge the location.' };
+  }
   const body = filingBody(values);
   const parsed = requestBodySchema.safeParse(body);
   if (!parsed.success) {
