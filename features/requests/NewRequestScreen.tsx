@@ -12,7 +12,9 @@ import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
-import { requestKeys, useCreateDraft, useMyProjects, useUpdateDraft, useUploadAttachments, useWorkflowEvent, type PickedFile } from './api';
+import { requestKeys, useCreateDraft, useMyProjects, useUpdateDraft, useWorkflowEvent, type PickedFile } from './api';
+import { UploadProgressList } from '../uploads/UploadProgressList';
+import { useFileUploads } from '../uploads/useFileUploads';
 import { fieldFor } from './filing/formSchema';
 import { RequestFilingForm } from './RequestFilingForm';
 
@@ -36,7 +38,7 @@ export function NewRequestScreen() {
   const projects = useMyProjects();
   const createDraft = useCreateDraft();
   const updateDraft = useUpdateDraft();
-  const upload = useUploadAttachments();
+  const uploads = useFileUploads();
   const workflow = useWorkflowEvent();
 
   const [draft, setDraft] = useState<RequestDetail | null>(null);
@@ -59,9 +61,15 @@ export function NewRequestScreen() {
       if (pending.length > 0) {
         at = 'upload';
         setStep('upload');
-        await upload.mutateAsync({ id: current.id, files: pending, purpose: 'revision' });
-        for (const f of pending) saved.current.add(f);
-        setSavedFiles(new Set(saved.current));
+        const draftId = current.id;
+        try {
+          // One file at a time with its own bar; a file the person cancels is left out of this filing.
+          const stored = await uploads.sendAll(`/api/requests/${encodeURIComponent(draftId)}/attachments?purpose=revision`, pending.map((f) => ({ name: f.name, size: f.size, blob: f.blob })));
+          stored.forEach((a, i) => a && saved.current.add(pending[i]!));
+        } finally {
+          setSavedFiles(new Set(saved.current));
+          void queryClient.invalidateQueries({ queryKey: requestKeys.detail(draftId) });
+        }
       }
 
       at = 'submit';
@@ -129,7 +137,12 @@ export function NewRequestScreen() {
           projectLocked={draft !== null}
           savedFiles={savedFiles}
           serverFieldErrors={failure?.error.fields}
-          beforeSubmit={failureNotice}
+          beforeSubmit={
+            <>
+              <UploadProgressList items={uploads.items} onCancel={uploads.cancel} />
+              {failureNotice}
+            </>
+          }
           onSubmit={(body, files) => void file(body, files)}
         />
       ) : null}

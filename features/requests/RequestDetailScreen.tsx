@@ -7,6 +7,7 @@ import type { AttachmentSummary, ConditionView, RequestDetail } from '../../shar
 import { useActor } from '../auth/useActor';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
+import { AttachmentThumbnail } from '../uploads/AttachmentThumbnail';
 import { Panel } from '../ui/Panel';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
@@ -60,6 +61,7 @@ function Attachments({ files }: { files: AttachmentSummary[] }) {
       {files.length === 0 ? <Text variant="muted">None.</Text> : null}
       {files.map((a) => (
         <View key={a.id} style={styles.row}>
+          <AttachmentThumbnail id={a.id} contentType={a.contentType} fileName={a.fileName} />
           <View style={styles.grow}>
             <Text>{a.fileName}</Text>
             <Text variant="muted">

@@ -2,14 +2,13 @@
 import { useInfiniteQuery, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { RequestListQuery } from '../../shared/requests/listQuery';
 import type { RequestDraft } from '../../shared/requests/requestBody';
-import type { AttachmentSummary, ProjectSummary, RequestDetail, RequestPage, RequestSummary } from '../../shared/requests/types';
+import type { ProjectSummary, RequestDetail, RequestPage, RequestSummary } from '../../shared/requests/types';
 import type { WorkflowEventInput } from '../../shared/workflow/events';
 import { ApiError, apiFetch } from '../api/http';
 
 export type RequestListFilters = Omit<Partial<RequestListQuery>, 'cursor'>;
 export type PersonOption = { id: string; name: string; email: string; organization: string | null };
 export type TrailCheck = { ok: true; events: number } | { ok: false; brokenAt: number };
-export type AttachmentPurpose = 'revision' | 'information_response' | 'federal_concurrence' | 'condition_evidence';
 
 export const requestKeys = {
   all: ['requests'] as const,
@@ -103,18 +102,6 @@ export function useUpdateDraft() {
 }
 
 export type PickedFile = { name: string; size: number; type: string; blob: Blob };
-
-export function useUploadAttachments() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ id, files, purpose = 'revision' }: { id: string; files: PickedFile[]; purpose?: AttachmentPurpose }) => {
-      const form = new FormData();
-      for (const f of files) form.append('files', f.blob, f.name);
-      return apiFetch<AttachmentSummary[]>(`${requestPath(id)}/attachments?purpose=${purpose}`, { method: 'POST', body: form });
-    },
-    onSuccess: (_, { id }) => queryClient.invalidateQueries({ queryKey: requestKeys.detail(id) }),
-  });
-}
 
 export function useWorkflowEvent() {
   const queryClient = useQueryClient();

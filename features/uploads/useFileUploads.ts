@@ -29,18 +29,19 @@ export function useFileUploads() {
     setItems((all) => all.map((i) => (i.key === key && (i.status === 'waiting' || i.status === 'sending') ? { ...i, status: 'cancelled' } : i)));
   }, []);
 
-  // Resolves with what was stored; throws the first real failure (not a cancellation).
-  const sendAll = useCallback(async (url: string, files: FileToSend[]): Promise<AttachmentSummary[]> => {
+  // Resolves with what was stored, file by file (null where cancelled); throws the first real
+  // failure, after which the files not yet sent stay unsent.
+  const sendAll = useCallback(async (url: string, files: FileToSend[]): Promise<(AttachmentSummary | null)[]> => {
     const batch = files.map((f, i) => ({ key: `${Date.now()}-${i}-${f.name}`, name: f.name, size: f.size, sent: 0, status: 'waiting' as const }));
     setItems(batch);
     controllers.current = new Map(batch.map((b) => [b.key, new AbortController()]));
-    const stored: AttachmentSummary[] = [];
+    const stored: (AttachmentSummary | null)[] = files.map(() => null);
     for (const [i, item] of batch.entries()) {
       const controller = controllers.current.get(item.key)!;
       if (controller.signal.aborted) continue;
       patch(item.key, { status: 'sending' });
       try {
-        stored.push(await uploadFile(url, files[i]!, (p) => patch(item.key, { sent: p.loaded }), controller.signal));
+        stored[i] = await uploadFile(url, files[i]!, (p) => patch(item.key, { sent: p.loaded }), controller.signal);
         patch(item.key, { status: 'stored', sent: item.size });
       } catch (err) {
         if (err instanceof ApiError && err.code === 'cancelled') continue;
