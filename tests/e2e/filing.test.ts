@@ -159,4 +159,25 @@ describe('filing a request through the web app', () => {
     expect(await page.getByText('D-3 drain outlet markup.pdf').count()).toBe(1);
     await context.close();
   });
+  // A slow upload shows its own bar and can be cancelled; the request is then filed without it.
+  it('shows each file’s progress and lets the contractor cancel a slow upload', async () => {
+    const vp = viewports[0]!;
+    const context = await browser.newContext({ viewport: { width: vp.width, height: vp.height } });
+    const page = await context.newPage();
+    await signInAs(page, 'contractor');
+    await page.getByTestId('desk-new-request').click();
+    await page.waitForURL(/\/requests\/new/);
+    await fillOtherDeviation(page, 'Relocate deck drain outlet at pier 2 (cancelled upload)');
+    // The store never answers, as on a deck with poor signal.
+    await page.route('**/api/requests/*/attachments*', () => undefined);
+    await page.getByTestId('filing-submit').click();
+    const progress = page.getByTestId('upload-progress');
+    await expect.poll(() => progress.textContent()).toContain('sending');
+    await screenshotWhole(page, vp, join(shots, 'phone-10-upload-in-progress.png'));
+    await page.getByTestId('upload-cancel').click();
+    await page.waitForURL(/\/requests\/[0-9a-f-]{36}(\?filed=1)?$/);
+    expect(await page.getByTestId('request-state').textContent()).toBe('With the section engineer');
+    expect(await page.getByTestId('request-attachments').textContent()).toContain('Attachments (0)');
+    await context.close();
+  });
 });
