@@ -4,7 +4,7 @@ import { createHash } from 'node:crypto';
 import { createServer, Socket, type Server } from 'node:net';
 import { join } from 'node:path';
 import { ListObjectsV2Command } from '@aws-sdk/client-s3';
-import { and, count, eq } from 'drizzle-orm';
+import { and, count, eq, sql } from 'drizzle-orm';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { attachments } from '../../db/schema';
@@ -13,6 +13,7 @@ import { buildTestApp, createScenario, s3ClientFor, signIn, waitForMail, type Te
 import { agentsFor, otherDeviationBody, requestAt } from '../support/requestFixtures';
 import { pdfOfSize, samplePdf, samplePhoto, samplePng } from '../support/sampleFiles';
 import { fakesDir, testBucket } from '../support/testSettings';
+import { privateDatabase } from '../support/privateDatabase';
 
 const sha256 = (b: Buffer) => createHash('sha256').update(b).digest('hex');
 const binary = (res: unknown, cb: (err: Error | null, body: unknown) => void) => {
@@ -210,3 +211,24 @@ async function pdfText(pdf: Buffer): Promise<string> {
   // Lines wrap in the PDF; join them so sentences and hashes can be searched whole.
   return text.replace(/\s+/g, ' ');
 }
+
+describe('an attachment row that cannot be written', () => {
+  it('takes its stored object away again, so no file is left without its row', async () => {
+    const url = await privateDatabase('spanrelay_api_rowfail_test');
+    const t = buildTestApp({ DATABASE_URL: url });
+    try {
+      const s = await createScenario(t.db);
+      const agent = await signIn(t, s.contractor.email);
+      const id = (await agent.post('/api/requests').send(otherDeviationBody(s.project.id))).body.id;
+      // The database refuses the row after the object is already in the store.
+      await t.db.execute(sql.raw(`create function refuse_attachment() returns trigger language plpgsql as $$ begin raise exception 'disk full'; end $$;
+        create trigger refuse_attachment before insert on attachments for each row execute function refuse_attachment();`));
+      const res = await agent.post(`/api/requests/${id}/attachments`).attach('files', await samplePdf(), 'sheet.pdf');
+      expect(res.status).toBe(500);
+      const left = await s3ClientFor(t.env).send(new ListObjectsV2Command({ Bucket: t.env.S3_BUCKET, Prefix: `projects/${s.project.id}/requests/${id}/` }));
+      expect(left.KeyCount ?? 0).toBe(0);
+    } finally {
+      await t.close();
+    }
+  });
+});
