@@ -56,17 +56,30 @@ ensure_chromium() {
 pg_as_owner() {
   if [ "$(id -u)" = 0 ]; then
     id postgres >/dev/null 2>&1 || as_root useradd --system --home-dir /var/lib/postgresql --shell /bin/false postgres
-    runuser -u postgres -- "$@"
+    # From /, which the postgres user can always enter, whatever the checkout's folder allows.
+    (cd / && runuser -u postgres -- "$@")
   else
     "$@"
   fi
 }
 
-# pg_up NAME PORT: a private cluster under .data/NAME listening on 127.0.0.1:PORT only.
+# The cluster lives in .data/NAME; as root, where the postgres user cannot reach the checkout
+# (a clone under a private home folder), it lives in a folder of its own for this checkout.
+pg_data_dir() {
+  local name="$1"
+  if [ "$(id -u)" = 0 ] && id postgres >/dev/null 2>&1 && ! runuser -u postgres -- test -x "$DATA" 2>/dev/null; then
+    printf '%s' "/var/lib/spanrelay/$(printf '%s' "$ROOT" | sha256sum | cut -c1-12)/$name"
+  else
+    printf '%s' "$DATA/$name"
+  fi
+}
+
+# pg_up NAME PORT: a private cluster listening on 127.0.0.1:PORT only.
 pg_up() {
   local name="$1" port="$2"
-  local dir="$DATA/$name" sock="/tmp/spanrelay-pg-$port"
   ensure_postgres_binaries
+  local dir sock="/tmp/spanrelay-pg-$port"
+  dir="$(pg_data_dir "$name")"
   mkdir -p "$dir" "$sock"
   if [ "$(id -u)" = 0 ]; then chown postgres "$dir" "$sock"; chmod 700 "$dir"; fi
   if [ ! -f "$dir/PG_VERSION" ]; then
@@ -82,7 +95,8 @@ pg_up() {
 
 pg_down() {
   local name="$1"
-  local dir="$DATA/$name"
+  local dir
+  dir="$(pg_data_dir "$name")"
   [ -f "$dir/PG_VERSION" ] || return 0
   ensure_postgres_binaries
   pg_as_owner "$PG_BIN/pg_ctl" -D "$dir" -m fast stop >/dev/null 2>&1 || true
