@@ -4,7 +4,7 @@ import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { toNodeHandler } from 'better-auth/node';
 import type { Database } from '../db/client';
-import type { Auth } from './auth/auth';
+import { clientAddressHeader, type Auth } from './auth/auth';
 import { actorOf, requireActor } from './auth/requireActor';
 import { devMailRoutes } from './dev/devMailRoutes';
 import { healthRoutes } from './health/healthRoutes';
@@ -33,7 +33,10 @@ export function createApp(parts: AppParts) {
   app.use('/api', sameOriginWrites(env.PUBLIC_URL));
 
   // better-auth reads its own body, so it is mounted before the JSON parser.
-  app.all('/api/auth/*splat', toNodeHandler(auth));
+  app.all('/api/auth/*splat', (req, _res, next) => {
+    req.headers[clientAddressHeader] = req.socket.remoteAddress ?? 'unknown';
+    next();
+  }, toNodeHandler(auth));
   app.use(express.json({ limit: '256kb' }));
 
   app.use(healthRoutes({ db, store, mailer }));

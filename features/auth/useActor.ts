@@ -34,7 +34,7 @@ export function useSignIn() {
 
 function signInMessage(status: number, message: string | undefined): string {
   if (status === 401) return 'That e-mail and password do not match an account.';
-  if (status === 429) return 'Too many attempts; wait a minute and try again.';
+  if (status === 429) return message || 'Too many failed sign-ins; wait and try again.';
   return message || 'Signing in failed; try again.';
 }
 

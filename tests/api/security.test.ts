@@ -64,4 +64,32 @@ describe('sessions and browser protections', () => {
     expect((await request(t.app).post('/api/auth/sign-out').set('origin', t.env.PUBLIC_URL).set('cookie', cookie)).status).toBe(200);
     expect((await request(t.app).get('/api/me').set('cookie', cookie)).status).toBe(401);
   });
+
+  it('limits failed sign-ins per account, and lets the right password through only after the wait', async () => {
+    const fresh = buildTestApp();
+    try {
+      const attempt = (email: string, password: string) =>
+        request(fresh.app).post('/api/auth/sign-in/email').set('origin', fresh.env.PUBLIC_URL).send({ email, password });
+      for (let i = 0; i < 5; i++) expect((await attempt(s.fieldInspector.email, 'wrong-password-1')).status).toBe(401);
+      const locked = await attempt(s.fieldInspector.email, testPassword);
+      expect(locked.status).toBe(429);
+      expect(locked.body.message).toMatch(/Too many failed sign-ins/);
+      // Another account from the same address is not held back by this one's failures.
+      expect((await attempt(s.sectionEngineer.email, testPassword)).status).toBe(200);
+    } finally {
+      await fresh.close();
+    }
+  });
+
+  it('limits failed sign-ins per address, across accounts', async () => {
+    const fresh = buildTestApp();
+    try {
+      const attempt = (email: string) =>
+        request(fresh.app).post('/api/auth/sign-in/email').set('origin', fresh.env.PUBLIC_URL).send({ email, password: 'wrong-password-2' });
+      for (let i = 0; i < 30; i++) expect((await attempt(`guess-${i}@test.spanrelay.test`)).status).toBe(401);
+      expect((await attempt('guess-31@test.spanrelay.test')).status).toBe(429);
+    } finally {
+      await fresh.close();
+    }
+  });
 });
