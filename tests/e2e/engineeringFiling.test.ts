@@ -7,7 +7,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchChromium } from '../support/browser';
 import { artifactsDir } from '../support/testSettings';
-import { screenshotWhole, signInAs } from './helpers';
+import { fillFields, screenshotWhole, signInAs } from './helpers';
 
 const shots = join(artifactsDir(), 'screenshots');
 const phone = { width: 390, height: 844 };
@@ -15,17 +15,21 @@ const wide = { width: 1440, height: 900 };
 const caution = 'engineer of record';
 
 async function fillDeckPlacement(page: Page, title: string) {
-  await page.getByTestId('filing-title').fill(title);
-  await page.getByTestId('filing-location').fill('Full deck, abutment 1 to abutment 2');
-  await page.getByTestId('filing-spans').fill('95, 120, 95');
-  await page.getByTestId('filing-deck-width').fill('46');
-  await page.getByTestId('filing-slab-thickness').fill('8.5');
-  await page.getByTestId('filing-haunch').fill('0.12');
-  await page.getByTestId('filing-planned-sequence').fill('Five stages: positive-moment lengths first, then the pier lengths (sheet S-6).');
+  await fillFields(page, {
+    'filing-title': title,
+    'filing-location': 'Full deck, abutment 1 to abutment 2',
+    'filing-spans': '95, 120, 95',
+    'filing-deck-width': '46',
+    'filing-slab-thickness': '8.5',
+    'filing-haunch': '0.12',
+    'filing-planned-sequence': 'Five stages: positive-moment lengths first, then the pier lengths (sheet S-6).',
+  });
   await page.getByTestId('filing-sequence-single_placement').click();
-  await page.getByTestId('filing-proposed-sequence').fill('One placement from abutment 1 toward abutment 2.');
-  await page.getByTestId('filing-placement-rate').fill('55');
-  await page.getByTestId('filing-equipment').fill('Two boom pumps, one finishing machine');
+  await fillFields(page, {
+    'filing-proposed-sequence': 'One placement from abutment 1 toward abutment 2.',
+    'filing-placement-rate': '55',
+    'filing-equipment': 'Two boom pumps, one finishing machine',
+  });
 }
 
 async function fillRetarder(page: Page) {
@@ -36,9 +40,11 @@ async function fillRetarder(page: Page) {
 }
 
 async function fillCommonRest(page: Page) {
-  await page.getByTestId('filing-reason').fill('Two pumps are on hand for the whole day; one placement removes the joints over the piers.');
-  await page.getByTestId('filing-proposed-change').fill('Place the whole deck at once with Type D retarded concrete instead of the staged sequence.');
-  await page.getByTestId('filing-needed-by').fill('2027-05-10');
+  await fillFields(page, {
+    'filing-reason': 'Two pumps are on hand for the whole day; one placement removes the joints over the piers.',
+    'filing-proposed-change': 'Place the whole deck at once with Type D retarded concrete instead of the staged sequence.',
+    'filing-needed-by': '2027-05-10',
+  });
   await page.getByTestId('filing-cost-none').click();
   await page.getByTestId('filing-time-impact').fill('-5');
 }
@@ -118,19 +124,25 @@ describe('engineering checks in the web app', () => {
     await page.getByTestId('filing-type-joint_seal_substitution').click();
     await page.getByTestId('filing-joint-location').fill('Abutment 2');
     await page.getByTestId('filing-specified-kind-strip_seal').click();
-    await page.getByTestId('filing-specified-capacity').fill('4');
-    await page.getByTestId('filing-specified-min').fill('0.5');
-    await page.getByTestId('filing-specified-max').fill('4.5');
+    await fillFields(page, {
+      'filing-specified-capacity': '4',
+      'filing-specified-min': '0.5',
+      'filing-specified-max': '4.5',
+    });
     await page.getByTestId('filing-substitute-kind-compression_seal').click();
-    await page.getByTestId('filing-substitute-capacity').fill('2');
-    await page.getByTestId('filing-substitute-min').fill('1');
-    await page.getByTestId('filing-substitute-max').fill('3');
-    await page.getByTestId('filing-contributing-length').fill('300');
+    await fillFields(page, {
+      'filing-substitute-capacity': '2',
+      'filing-substitute-min': '1',
+      'filing-substitute-max': '3',
+      'filing-contributing-length': '300',
+    });
     await page.getByTestId('filing-material-concrete').click();
     await page.getByTestId('filing-climate-moderate').click();
-    await page.getByTestId('filing-install-temp').fill('64');
-    await page.getByTestId('filing-gap-reference').fill('2');
-    await page.getByTestId('filing-reference-temp').fill('60');
+    await fillFields(page, {
+      'filing-install-temp': '64',
+      'filing-gap-reference': '2',
+      'filing-reference-temp': '60',
+    });
 
     const live = page.getByTestId('filing-live-check');
     await expect.poll(() => page.getByTestId('filing-check-verdict').textContent()).toBe('Not acceptable by these checks');

@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoEmail } from '../../server/demo/demoScenario';
 import { launchChromium } from '../support/browser';
 import { artifactsDir } from '../support/testSettings';
-import { base, screenshotWhole, signInAs } from './helpers';
+import { base, fillFields, screenshotWhole, signInAs } from './helpers';
 
 const shots = join(artifactsDir(), 'screenshots');
 
@@ -31,14 +31,16 @@ async function mailFor(to: string, subjectPart: string): Promise<CaughtMail | un
 }
 
 async function fillOtherDeviation(page: Page, title: string) {
-  await page.getByTestId('filing-title').fill(title);
-  await page.getByTestId('filing-location').fill('Deck drain DR-4 over pier 2, north fascia');
-  await page.getByTestId('filing-span').fill('2');
-  await page.getByTestId('filing-station').fill('12+40');
-  await page.getByTestId('filing-plan-sheets').fill('S-12, D-3');
-  await page.getByTestId('filing-reason').fill('The outlet as drawn on sheet D-3 lands on the pier cap step; the downspout cannot clear it.');
-  await page.getByTestId('filing-proposed-change').fill('Move the outlet 18 in toward span 3 and extend the downspout with two 45° bends.');
-  await page.getByTestId('filing-needed-by').fill('2027-04-15');
+  await fillFields(page, {
+    'filing-title': title,
+    'filing-location': 'Deck drain DR-4 over pier 2, north fascia',
+    'filing-span': '2',
+    'filing-station': '12+40',
+    'filing-plan-sheets': 'S-12, D-3',
+    'filing-reason': 'The outlet as drawn on sheet D-3 lands on the pier cap step; the downspout cannot clear it.',
+    'filing-proposed-change': 'Move the outlet 18 in toward span 3 and extend the downspout with two 45° bends.',
+    'filing-needed-by': '2027-04-15',
+  });
   await page.getByTestId('filing-cost-added_cost').click();
   await page.getByTestId('filing-cost-amount').fill('1850');
   await page.getByTestId('filing-time-impact').fill('0');

@@ -1,4 +1,4 @@
-// What the browser tests share: signing in as a demo person and whole-page screenshots.
+// What the browser tests share: signing in as a demo person, filling fields, whole-page screenshots.
 import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
 import { demoEmail, demoPassword } from '../../server/demo/demoScenario';
@@ -29,4 +29,9 @@ export async function screenshotWhole(page: Page, vp: { width: number; height: n
   await page.setViewportSize({ width: vp.width, height: Math.max(vp.height, Math.min(contentHeight, 8000)) });
   await page.screenshot({ path });
   await page.setViewportSize({ width: vp.width, height: vp.height });
+}
+
+// Fills text fields by test id, in the order given (the form validates as it is touched).
+export async function fillFields(page: Page, values: Record<string, string>) {
+  for (const [testId, value] of Object.entries(values)) await page.getByTestId(testId).fill(value);
 }
