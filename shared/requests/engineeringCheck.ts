@@ -93,10 +93,18 @@ export function engineeringCheckFor(body: RequestBody): EngineeringCheck | null 
         specified: { kind: body.specified.kind, minOpeningIn: body.specified.minOpeningIn, maxOpeningIn: body.specified.maxOpeningIn },
         substitute: { kind: body.substitute.kind, minOpeningIn: body.substitute.minOpeningIn, maxOpeningIn: body.substitute.maxOpeningIn },
       });
+      // A seal's movement capacity is the span of openings it works over; a data sheet that says
+      // otherwise is worth a reviewer's question, and the check goes by the openings.
+      const capacityNotes = (['specified', 'substitute'] as const)
+        .filter((side) => Math.abs(body[side].movementCapacityIn - (body[side].maxOpeningIn - body[side].minOpeningIn)) > 0.01)
+        .map(
+          (side) =>
+            `The ${side} seal's stated movement capacity (${body[side].movementCapacityIn} in) differs from its opening range (${(body[side].maxOpeningIn - body[side].minOpeningIn).toFixed(2)} in); the check uses the opening range.`,
+        );
       return check(
         body,
         seal.pass ? 'acceptable' : 'not_acceptable',
-        seal.reasons,
+        [...seal.reasons, ...capacityNotes],
         { contributingLengthFt: body.contributingLengthFt, material: body.material, climate: body.climate, installTempF: body.installTempF, specified: body.specified, substitute: body.substitute },
         { movement, gap, seal },
       );
