@@ -10,7 +10,8 @@ function required(name: string): string {
 
 export const repoRoot = join(__dirname, '..', '..');
 export const artifactsDir = () => process.env.TEST_ARTIFACTS ?? join(repoRoot, 'tests', '.artifacts');
-export const fakesDir = (suite: 'api' | 'e2e') => join(repoRoot, '.data', 'fakes-test', suite);
+// TEST_FAKES_DIR lets two test runs on one machine keep their fakes' files apart.
+export const fakesDir = (suite: 'api' | 'e2e') => join(process.env.TEST_FAKES_DIR ?? join(repoRoot, '.data', 'fakes-test'), suite);
 
 export function suitePorts(suite: 'api' | 'e2e') {
   const prefix = suite === 'api' ? 'TEST_API' : 'TEST_E2E';
