@@ -1,9 +1,10 @@
 // Reading requests: the register (filtered, cursor-paged, longest waiting first), one request in
 // full with the moves this reader may make now, and the trail's chain verification.
+import { z } from 'zod';
 import type { Database } from '../../db/client';
 import { revisionChanges } from '../../shared/requests/revisionDiff';
 import type { RequestDraft } from '../../shared/requests/requestBody';
-import { isRequestState, requestStates, statesAtDesk } from '../../shared/requests/states';
+import { isRequestState, requestStateInfo, requestStates, statesAtDesk } from '../../shared/requests/states';
 import type { Actor, RequestDetail, RequestPage } from '../../shared/requests/types';
 import { availableEvents } from '../../shared/workflow/evaluate';
 import type { WorkflowFacts } from '../../shared/workflow/rules';
@@ -14,6 +15,7 @@ import { mayRead, readableProjectIds } from './access';
 import {
   attachmentsOf,
   conditionsOf,
+  countRequests,
   listRequests,
   membersWithRole,
   openConditionCount,
@@ -22,43 +24,64 @@ import {
   revisionsOf,
   toAttachmentSummary,
   trailOf,
+  type RequestFilter,
 } from './requestRepository';
-import type { RequestListQuery } from '../../shared/requests/listQuery';
+import type { RequestCounts, RequestFilterQuery, RequestListQuery } from '../../shared/requests/listQuery';
 
-export function encodeCursor(deskSince: string, id: string): string {
-  return Buffer.from(JSON.stringify([deskSince, id])).toString('base64url');
+export function encodeCursor(key: string, id: string): string {
+  return Buffer.from(JSON.stringify([key, id])).toString('base64url');
 }
 
-function decodeCursor(cursor: string): { deskSince: Date; id: string } {
+function decodeCursor(cursor: string): { key: string; id: string } {
   try {
-    const [deskSince, id] = JSON.parse(Buffer.from(cursor, 'base64url').toString('utf8')) as [string, string];
-    const at = new Date(deskSince);
-    if (Number.isNaN(at.getTime()) || typeof id !== 'string') throw new Error('bad cursor');
-    return { deskSince: at, id };
+    const [key, id] = JSON.parse(Buffer.from(cursor, 'base64url').toString('utf8')) as [unknown, unknown];
+    // Every sort key is a time (or 'infinity' for no due date).
+    if (typeof key !== 'string' || (key !== 'infinity' && Number.isNaN(new Date(key).getTime())) || typeof id !== 'string' || !uuid.safeParse(id).success) {
+      throw new Error('bad cursor');
+    }
+    return { key, id };
   } catch {
     throw new HttpError(400, 'bad_cursor', 'That page cursor is not one this server gave out; start the list again.');
   }
 }
 
-export async function listFor(db: Database, actor: Actor, q: RequestListQuery): Promise<RequestPage> {
-  let states = q.state ? [q.state] : undefined;
-  if (q.desk === 'mine') {
-    const mine = statesAtDesk(actor.role);
-    states = states ? states.filter((s) => mine.includes(s as never)) : mine;
-  }
-  const items = await listRequests(db, {
+const uuid = z.uuid();
+
+// The filters as the repository takes them, narrowed to what this reader may see.
+async function filterFor(db: Database, actor: Actor, q: RequestFilterQuery): Promise<RequestFilter> {
+  let states: string[] | undefined = q.state ? [q.state] : undefined;
+  const narrow = (allowed: readonly string[]) => {
+    states = states ? states.filter((s) => allowed.includes(s)) : [...allowed];
+  };
+  if (q.desk === 'mine') narrow(statesAtDesk(actor.role));
+  if (q.atDesk) narrow(q.atDesk === 'settled' ? requestStates.filter((s) => requestStateInfo[s].settled) : statesAtDesk(q.atDesk));
+  return {
     projectIds: await readableProjectIds(db, actor),
     states,
     assignedEorId: q.desk === 'mine' && actor.role === 'engineer_of_record' ? actor.id : undefined,
     type: q.type,
     projectId: q.projectId,
     text: q.q,
-    after: q.cursor ? decodeCursor(q.cursor) : undefined,
-    limit: q.limit + 1,
-  });
-  const page = items.slice(0, q.limit);
+  };
+}
+
+export async function listFor(db: Database, actor: Actor, q: RequestListQuery): Promise<RequestPage> {
+  const rows = await listRequests(db, await filterFor(db, actor, q), { sort: q.sort, after: q.cursor ? decodeCursor(q.cursor) : undefined }, q.limit + 1);
+  const page = rows.slice(0, q.limit);
   const last = page[page.length - 1];
-  return { items: page, nextCursor: items.length > q.limit && last ? encodeCursor(last.deskSince, last.id) : null };
+  return { items: page.map((r) => r.summary), nextCursor: rows.length > q.limit && last ? encodeCursor(last.sortKey, last.summary.id) : null };
+}
+
+export async function countsFor(db: Database, actor: Actor, q: RequestFilterQuery): Promise<RequestCounts> {
+  const rows = await countRequests(db, await filterFor(db, actor, q));
+  const counts: RequestCounts = { total: 0, overdue: 0, byState: {} };
+  for (const row of rows) {
+    if (!isRequestState(row.state)) continue;
+    counts.byState[row.state] = row.n;
+    counts.total += row.n;
+    counts.overdue += row.overdue;
+  }
+  return counts;
 }
 
 export async function workflowFactsOf(db: Database, requestId: string): Promise<WorkflowFacts | null> {

@@ -1,9 +1,13 @@
 // Database access for requests. Writes run inside the service's transaction, under the request's
 // row lock taken by `lockRequest`.
-import { aliasedTable, and, asc, count, eq, gt, ilike, inArray, isNull, or, sql, type SQL } from 'drizzle-orm';
+import { aliasedTable, and, asc, count, desc, eq, gt, ilike, inArray, isNull, lt, or, sql, type SQL } from 'drizzle-orm';
 import type { Database, Transaction } from '../../db/client';
 import { attachments, changeRequests, projectMembers, projects, requestConditions, requestRevisions, trailEvents, users } from '../../db/schema';
+import { deskDueAt, deskOf } from '../../shared/requests/deskClock';
+import type { RequestSort } from '../../shared/requests/listQuery';
+import { requestStateInfo, requestStates } from '../../shared/requests/states';
 import type { AttachmentSummary, RequestSummary } from '../../shared/requests/types';
+import { defaultDeskDueDays, type DeskDueDays } from '../../shared/workflow/desks';
 import type { Role } from '../../shared/roles';
 
 type Executor = Database | Transaction;
@@ -25,6 +29,7 @@ const summaryColumns = {
   projectCode: projects.code,
   projectName: projects.name,
   structureNumber: projects.structureNumber,
+  deskDueDays: projects.deskDueDays,
   filedById: users.id,
   filedByName: users.name,
   filedByOrganization: users.organization,
@@ -57,6 +62,7 @@ type SummaryRow = {
   projectCode: string;
   projectName: string;
   structureNumber: string;
+  deskDueDays: DeskDueDays;
   filedById: string;
   filedByName: string;
   filedByOrganization: string | null;
@@ -65,7 +71,8 @@ type SummaryRow = {
   eorOrganization: string | null;
 };
 
-function toSummary(row: SummaryRow): RequestSummary {
+function toSummary(row: SummaryRow, now: Date = new Date()): RequestSummary {
+  const dueAt = deskDueAt(row.state, row.deskSince, row.deskDueDays);
   return {
     id: row.id,
     number: row.number,
@@ -78,6 +85,9 @@ function toSummary(row: SummaryRow): RequestSummary {
     filedBy: { id: row.filedById, name: row.filedByName, organization: row.filedByOrganization },
     assignedEor: row.eorId ? { id: row.eorId, name: row.eorName ?? '', organization: row.eorOrganization } : null,
     deskSince: row.deskSince.toISOString(),
+    desk: deskOf(row.state),
+    dueAt: dueAt?.toISOString() ?? null,
+    overdue: dueAt !== null && dueAt.getTime() < now.getTime(),
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
   };
@@ -92,12 +102,29 @@ export type RequestFilter = {
   type?: string;
   projectId?: string;
   text?: string;
-  after?: { deskSince: Date; id: string };
-  limit: number;
 };
 
-// Longest-waiting first: the desk time ascending, id to break ties; the cursor is the last row's pair.
-export async function listRequests(db: Database, f: RequestFilter): Promise<RequestSummary[]> {
+// The order of a page and the key its cursor carries. Keys are read back from the database as text,
+// so a cursor keeps the full microsecond time and no row is repeated or skipped across pages.
+export type RequestPageOrder = { sort: RequestSort; after?: { key: string; id: string } };
+
+// The due date in SQL, the same as deskDueAt: the desk's days (the project's, else our default)
+// after the request reached the desk. Settled requests have none; 'infinity' sorts them last.
+const waitingStates = requestStates.filter((s) => requestStateInfo[s].desk);
+const byWaitingState = (value: (s: (typeof waitingStates)[number]) => string) =>
+  sql`case ${changeRequests.state} ${sql.raw(waitingStates.map((s) => `when '${s}' then ${value(s)}`).join(' '))} end`;
+const deskOfStateSql = byWaitingState((s) => `'${requestStateInfo[s].desk}'`);
+const defaultDaysSql = byWaitingState((s) => String(defaultDeskDueDays[requestStateInfo[s].desk!]));
+const dueExpression = sql`coalesce(${changeRequests.deskSince} + make_interval(days => coalesce((${projects.deskDueDays} ->> ${deskOfStateSql})::int, ${defaultDaysSql})), 'infinity'::timestamptz)`;
+
+const sortColumns: Record<RequestSort, { key: SQL; descending: boolean }> = {
+  due: { key: dueExpression, descending: false },
+  waiting: { key: sql`${changeRequests.deskSince}`, descending: false },
+  newest: { key: sql`${changeRequests.createdAt}`, descending: true },
+  updated: { key: sql`${changeRequests.updatedAt}`, descending: true },
+};
+
+function filterConditions(f: RequestFilter): (SQL | undefined)[] {
   const where: (SQL | undefined)[] = [];
   if (f.projectIds) where.push(f.projectIds.length ? inArray(changeRequests.projectId, f.projectIds) : sql`false`);
   if (f.states) where.push(f.states.length ? inArray(changeRequests.state, f.states) : sql`false`);
@@ -108,14 +135,46 @@ export async function listRequests(db: Database, f: RequestFilter): Promise<Requ
     const like = `%${f.text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
     where.push(or(ilike(changeRequests.title, like), ilike(changeRequests.number, like), ilike(projects.name, like), ilike(projects.structureNumber, like)));
   }
-  if (f.after) {
-    where.push(or(gt(changeRequests.deskSince, f.after.deskSince), and(eq(changeRequests.deskSince, f.after.deskSince), gt(changeRequests.id, f.after.id))));
+  return where;
+}
+
+export async function listRequests(db: Database, f: RequestFilter, order: RequestPageOrder, limit: number): Promise<{ summary: RequestSummary; sortKey: string }[]> {
+  const { key, descending } = sortColumns[order.sort];
+  const where = filterConditions(f);
+  if (order.after) {
+    const k = sql`${order.after.key}::timestamptz`;
+    where.push(
+      descending
+        ? sql`(${key} < ${k} or (${key} = ${k} and ${changeRequests.id} < ${order.after.id}))`
+        : sql`(${key} > ${k} or (${key} = ${k} and ${changeRequests.id} > ${order.after.id}))`,
+    );
   }
-  const rows = await summaryQuery(db)
+  const rows = await db
+    .select({ ...summaryColumns, sortKey: sql<string>`(${key})::text`.as('sort_key') })
+    .from(changeRequests)
+    .innerJoin(projects, eq(projects.id, changeRequests.projectId))
+    .innerJoin(users, eq(users.id, changeRequests.filedById))
+    .leftJoin(eorUsers, eq(eorUsers.id, changeRequests.assignedEorId))
     .where(and(...where))
-    .orderBy(asc(changeRequests.deskSince), asc(changeRequests.id))
-    .limit(f.limit);
-  return rows.map(toSummary);
+    .orderBy(descending ? desc(key) : asc(key), descending ? desc(changeRequests.id) : asc(changeRequests.id))
+    .limit(limit);
+  const now = new Date();
+  const typed: (SummaryRow & { sortKey: string })[] = rows;
+  return typed.map((row) => ({ summary: toSummary(row, now), sortKey: row.sortKey }));
+}
+
+// How many requests match, per state, and how many are past due at their desk.
+export async function countRequests(db: Database, f: RequestFilter): Promise<{ state: string; n: number; overdue: number }[]> {
+  return db
+    .select({
+      state: changeRequests.state,
+      n: count(),
+      overdue: sql<number>`(count(*) filter (where ${dueExpression} < now()))::int`,
+    })
+    .from(changeRequests)
+    .innerJoin(projects, eq(projects.id, changeRequests.projectId))
+    .where(and(...filterConditions(f)))
+    .groupBy(changeRequests.state);
 }
 
 export async function requestSummary(db: Executor, id: string): Promise<RequestSummary | null> {

@@ -4,7 +4,7 @@ import multer from 'multer';
 import { z } from 'zod';
 import type { Database } from '../../db/client';
 import { uploadLimits } from '../../shared/requests/filing';
-import { requestListQuerySchema } from '../../shared/requests/listQuery';
+import { requestFilterSchema, requestListQuerySchema } from '../../shared/requests/listQuery';
 import { requestDraftSchema } from '../../shared/requests/requestBody';
 import { workflowEventSchema } from '../../shared/workflow/events';
 import { actorOf } from '../auth/requireActor';
@@ -14,7 +14,7 @@ import { addComment, applyEvent } from '../workflow/workflowService';
 import { attachmentPreview, authorizeUpload, objectKeyFor, openAttachment, recordUploads, removeDraftAttachment, type ReceivedFile } from './attachmentService';
 import { setUploadTarget, streamingUploadStorage } from '../storage/streamingUploadStorage';
 import { createDraft, updateDraft } from './draftService';
-import { detailFor, engineersOfRecordFor, listFor, verifyFor } from './readService';
+import { countsFor, detailFor, engineersOfRecordFor, listFor, verifyFor } from './readService';
 
 const idParam = z.uuid();
 
@@ -49,6 +49,13 @@ export function requestRoutes(deps: { db: Database; store: ObjectStore; publicUr
     const query = requestListQuerySchema.safeParse(req.query);
     if (!query.success) throw validationError(query.error, 'The list filters are not valid.');
     res.json(await listFor(db, actorOf(req), query.data));
+  });
+
+  // Before /:id, which would take "counts" for an id.
+  router.get('/api/requests/counts', async (req, res) => {
+    const query = requestFilterSchema.safeParse(req.query);
+    if (!query.success) throw validationError(query.error, 'The list filters are not valid.');
+    res.json(await countsFor(db, actorOf(req), query.data));
   });
 
   router.post('/api/requests', async (req, res) => {

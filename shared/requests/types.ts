@@ -1,5 +1,6 @@
 // Shapes the API returns for requests; the client renders them, the server builds them.
 import type { Role } from '../roles';
+import type { DeskRole } from '../workflow/desks';
 import type { MachineEventType, WorkflowFacts } from '../workflow/rules';
 import type { RequestDraft } from './requestBody';
 
@@ -66,6 +67,10 @@ export type RequestSummary = {
   filedBy: PersonRef;
   assignedEor: PersonRef | null;
   deskSince: string;
+  // The desk it waits at (null once settled), when it falls due there, and whether that has passed.
+  desk: DeskRole | null;
+  dueAt: string | null;
+  overdue: boolean;
   createdAt: string;
   updatedAt: string;
 };
