@@ -6,6 +6,7 @@ import { toNodeHandler } from 'better-auth/node';
 import type { Database } from '../db/client';
 import { clientAddressHeader, type Auth } from './auth/auth';
 import { auditRoutes } from './audit/auditRoutes';
+import { auditRoutes } from './audit/auditRoutes';
 import { actorOf, requireActor } from './auth/requireActor';
 import { conditionRoutes } from './conditions/conditionRoutes';
 import { devMailRoutes } from './dev/devMailRoutes';
@@ -50,6 +51,7 @@ export function createApp(parts: AppParts) {
     res.json(actorOf(req));
   });
   signedIn.use(projectRoutes(db));
+  signedIn.use(auditRoutes(db));
   signedIn.use(auditRoutes(db));
   signedIn.use(conditionRoutes(db));
   signedIn.use(requestRoutes({ db, store, publicUrl: env.PUBLIC_URL, maxFileBytes: env.UPLOAD_MAX_FILE_BYTES, maxRequestBytes: env.UPLOAD_MAX_REQUEST_BYTES }));

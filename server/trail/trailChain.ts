@@ -55,6 +55,22 @@ export async function appendTrailEvent(tx: Transaction, input: TrailAppend) {
   return row!;
 }
 
+// The stored row as it was hashed; exports print it so others can recompute the chain.
+export function hashedEventOf(row: typeof trailEvents.$inferSelect): HashedTrailEvent {
+  return {
+    requestId: row.requestId,
+    seq: row.seq,
+    eventType: row.eventType,
+    stateBefore: row.stateBefore,
+    stateAfter: row.stateAfter,
+    actorId: row.actorId,
+    actorRole: row.actorRole,
+    comment: row.comment,
+    payload: row.payload,
+    createdAt: row.createdAt.toISOString(),
+  };
+}
+
 export type TrailVerification = { ok: true; events: number; lastHash: string } | { ok: false; brokenAt: number };
 
 export async function verifyTrail(db: Database, requestId: string): Promise<TrailVerification> {
@@ -64,19 +80,7 @@ export async function verifyTrail(db: Database, requestId: string): Promise<Trai
   for (const row of rows) {
     // A missing sequence number means a row was removed: the break is where it was.
     if (row.seq !== expectedSeq) return { ok: false, brokenAt: expectedSeq };
-    const event: HashedTrailEvent = {
-      requestId: row.requestId,
-      seq: row.seq,
-      eventType: row.eventType,
-      stateBefore: row.stateBefore,
-      stateAfter: row.stateAfter,
-      actorId: row.actorId,
-      actorRole: row.actorRole,
-      comment: row.comment,
-      payload: row.payload,
-      createdAt: row.createdAt.toISOString(),
-    };
-    if (row.prevHash !== prevHash || trailHash(prevHash, event) !== row.hash) return { ok: false, brokenAt: row.seq };
+    if (row.prevHash !== prevHash || trailHash(prevHash, hashedEventOf(row)) !== row.hash) return { ok: false, brokenAt: row.seq };
     prevHash = row.hash;
     expectedSeq += 1;
   }
