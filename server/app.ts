@@ -6,8 +6,9 @@ import { toNodeHandler } from 'better-auth/node';
 import type { Database } from '../db/client';
 import { clientAddressHeader, type Auth } from './auth/auth';
 import { auditRoutes } from './audit/auditRoutes';
-import { auditRoutes } from './audit/auditRoutes';
 import { actorOf, requireActor } from './auth/requireActor';
+import { adminRoutes } from './admin/adminRoutes';
+import { invitationRoutes } from './admin/invitationRoutes';
 import { conditionRoutes } from './conditions/conditionRoutes';
 import { devMailRoutes } from './dev/devMailRoutes';
 import { healthRoutes } from './health/healthRoutes';
@@ -45,13 +46,15 @@ export function createApp(parts: AppParts) {
   app.use(healthRoutes({ db, store, mailer }));
   if (env.NODE_ENV !== 'production' && env.MAIL_CATCHER_URL) app.use(devMailRoutes(env.MAIL_CATCHER_URL));
 
+  app.use(invitationRoutes(db));
+
   const signedIn = Router();
   signedIn.use('/api', requireActor(auth));
   signedIn.get('/api/me', (req, res) => {
     res.json(actorOf(req));
   });
   signedIn.use(projectRoutes(db));
-  signedIn.use(auditRoutes(db));
+  signedIn.use(adminRoutes({ db, mailer, publicUrl: env.PUBLIC_URL }));
   signedIn.use(auditRoutes(db));
   signedIn.use(conditionRoutes(db));
   signedIn.use(requestRoutes({ db, store, publicUrl: env.PUBLIC_URL, maxFileBytes: env.UPLOAD_MAX_FILE_BYTES, maxRequestBytes: env.UPLOAD_MAX_REQUEST_BYTES }));

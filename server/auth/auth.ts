@@ -6,12 +6,33 @@ import { APIError, createAuthMiddleware } from 'better-auth/api';
 import { createSignInThrottle } from './signInThrottle';
 import type { Database } from '../../db/client';
 import * as schema from '../../db/schema';
+import { maxPasswordLength, minPasswordLength, passwordProblem } from '../../shared/people/password';
 import type { ServerEnv } from '../env';
+import { createMailer, type Mailer } from '../mail/mailer';
+import { passwordResetMail, resetLink } from '../people/accountMail';
 
 // Set by the server from the connection itself before better-auth runs, never taken from the client.
 export const clientAddressHeader = 'x-spanrelay-client-address';
 
-export function createAuth(db: Database, env: ServerEnv) {
+const resetValidSeconds = 60 * 60;
+
+// Without a mailer of the process's own, each reset opens and closes its own SMTP connection.
+function oneOffMailer(env: ServerEnv): Mailer {
+  return {
+    async send(mail) {
+      const mailer = createMailer(env);
+      try {
+        await mailer.send(mail);
+      } finally {
+        mailer.close();
+      }
+    },
+    isUp: async () => true,
+    close: () => {},
+  };
+}
+
+export function createAuth(db: Database, env: ServerEnv, mailer: Mailer = oneOffMailer(env)) {
   const throttle = createSignInThrottle();
   const signInKeys = (ctx: { body?: unknown; headers?: Headers }) => ({
     email: String((ctx.body as { email?: unknown } | undefined)?.email ?? '').trim().toLowerCase(),
@@ -24,7 +45,23 @@ export function createAuth(db: Database, env: ServerEnv) {
     secret: env.BETTER_AUTH_SECRET,
     trustedOrigins: [env.PUBLIC_URL],
     database: drizzleAdapter(db, { provider: 'pg', usePlural: true, schema }),
-    emailAndPassword: { enabled: true, disableSignUp: true, minPasswordLength: 10 },
+    emailAndPassword: {
+      enabled: true,
+      disableSignUp: true,
+      minPasswordLength,
+      maxPasswordLength,
+      resetPasswordTokenExpiresIn: resetValidSeconds,
+      // Whoever held the old password is signed out everywhere by the reset.
+      revokeSessionsOnPasswordReset: true,
+      sendResetPassword: async ({ user, token }) => {
+        // Not awaited: the answer must take as long for an unknown address as for a known one.
+        const mail = passwordResetMail({ to: user.email, name: user.name, link: resetLink(env.PUBLIC_URL, token), validMinutes: resetValidSeconds / 60 });
+        void mailer.send(mail).catch((err: unknown) => console.error('[spanrelay] password reset mail not sent:', err instanceof Error ? err.message : err));
+      },
+      onPasswordReset: async ({ user }) => {
+        throttle.recordSuccess(user.email.toLowerCase());
+      },
+    },
     user: {
       additionalFields: {
         role: { type: 'string', required: true, input: false, defaultValue: 'contractor' },
@@ -36,11 +73,12 @@ export function createAuth(db: Database, env: ServerEnv) {
     telemetry: { enabled: false },
     hooks: {
       before: createAuthMiddleware(async (ctx) => {
+        if (ctx.path === '/reset-password') return refuseWeakReset(ctx);
         if (ctx.path !== '/sign-in/email') return;
         const { email, address } = signInKeys(ctx);
         const waitMs = throttle.retryAfterMs(email, address);
         if (waitMs > 0) {
-          throw new APIError('TOO_MANY_REQUESTS', { message: `Too many failed sign-ins. Try again in ${Math.ceil(waitMs / 60000)} minutes, or ask an administrator to reset the password.` });
+          throw new APIError('TOO_MANY_REQUESTS', { message: `Too many failed sign-ins. Try again in ${Math.ceil(waitMs / 60000)} minutes, or choose “Forgot your password?” to reset it.` });
         }
       }),
       after: createAuthMiddleware(async (ctx) => {
@@ -51,6 +89,18 @@ export function createAuth(db: Database, env: ServerEnv) {
       }),
     },
   });
+}
+
+// The same rule an invited person meets: the new password may not contain the address's name part.
+// Only a live token reaches the check; anything else is left to better-auth's own answer.
+async function refuseWeakReset(ctx: Parameters<Parameters<typeof createAuthMiddleware>[0]>[0]) {
+  const body = (ctx.body ?? {}) as { token?: unknown; newPassword?: unknown };
+  if (typeof body.token !== 'string' || typeof body.newPassword !== 'string') return;
+  const verification = await ctx.context.internalAdapter.findVerificationValue(`reset-password:${body.token}`);
+  if (!verification || verification.expiresAt < new Date()) return;
+  const user = await ctx.context.internalAdapter.findUserById(verification.value);
+  const problem = user ? passwordProblem(body.newPassword, user.email) : null;
+  if (problem) throw new APIError('BAD_REQUEST', { message: problem, code: 'WEAK_PASSWORD' });
 }
 
 export type Auth = ReturnType<typeof createAuth>;
