@@ -2,17 +2,18 @@
 import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
 import { demoEmail, demoPassword } from '../../server/demo/demoScenario';
+import { roleLabels, type Role } from '../../shared/roles';
 import { testServerEnv } from '../support/testSettings';
 
 export const base = testServerEnv('e2e').PUBLIC_URL;
 
-export async function signInAs(page: Page, role: 'contractor' | 'section_engineer') {
+export async function signInAs(page: Page, role: Role) {
   await page.goto(`${base}/`);
   await page.waitForURL(/\/sign-in/);
   await page.getByTestId('sign-in-email').fill(demoEmail(role));
   await page.getByTestId('sign-in-password').fill(demoPassword);
   await page.getByTestId('sign-in-submit').click();
-  await expect.poll(() => page.getByTestId('shell-actor').textContent()).toContain(role === 'contractor' ? 'Contractor' : 'Section engineer');
+  await expect.poll(() => page.getByTestId('shell-actor').textContent()).toContain(roleLabels[role]);
 }
 
 // The app scrolls inside its own view, not the document, so a full-page shot would stop at the

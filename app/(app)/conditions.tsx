@@ -1,0 +1,1 @@
+export { ConditionsScreen as default } from '../../features/conditions/ConditionsScreen';
