@@ -1,15 +1,14 @@
-// The filing form for every request type. It checks with the shared schema as the person types,
-// runs the engineering check live for the typed requests, and hands the screen a complete request
-// body; sending it is the screen's job.
-import { useEffect, useState, type ReactNode } from 'react';
-import { useForm, useWatch, type FieldPath } from 'react-hook-form';
+// The filing form for every request type, in five steps. It checks with the shared schema as the
+// person types, lets a step be left only when its own boxes are right, runs the engineering check
+// live for the typed requests, and hands the screen a complete request body; saving and sending
+// are the screen's job.
+import { useEffect, useReducer, useRef, useState, type ReactNode } from 'react';
+import { get, useForm, useWatch, type FieldErrors, type FieldPath } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { StyleSheet, View } from 'react-native';
 import type { RequestBody, RequestType } from '../../shared/requests/requestBody';
 import type { ProjectSummary } from '../../shared/requests/types';
-import { Button } from '../ui/Button';
 import { FieldError } from '../ui/Choice';
-import { Text } from '../ui/Text';
 import { space } from '../ui/theme';
 import type { PickedFile } from './api';
 import { ScheduleAndCost, TheChange, WhatAndWhere } from './filing/CommonFields';
@@ -17,46 +16,111 @@ import { ConstructionJointFields } from './filing/ConstructionJointFields';
 import { DeckPlacementFields } from './filing/DeckPlacementFields';
 import { FilesSection } from './filing/FilesSection';
 import { fieldFor, filingSchema } from './filing/formSchema';
-import { emptyFiling, type FilingFormValues } from './filing/formValues';
+import type { FilingFormValues } from './filing/formValues';
 import { LiveEngineeringCheck } from './filing/LiveEngineeringCheck';
+import { ReviewStep } from './filing/ReviewStep';
 import { SealSubstitutionFields } from './filing/SealSubstitutionFields';
+import { StepIndicator } from './filing/StepIndicator';
+import { StepNav } from './filing/StepNav';
+import { earliestStep, firstStep, stepFields, stepOfField, stepReducer, type FilingStep } from './filing/steps';
 import { TypeChooser } from './filing/TypeChooser';
+import type { DraftNotice } from './filing/useFilingDraft';
 
 type Props = {
   projects: ProjectSummary[];
+  initialValues: FilingFormValues;
+  initialStep: FilingStep;
   busy: boolean;
-  // What is happening now, while busy ("Uploading 2 files…").
+  // What is happening now, while busy ("Storing the files…").
   progress?: string | null;
   // Once a draft exists its project and type are fixed, and files already stored with it stay.
   projectLocked: boolean;
+  files: PickedFile[];
+  onFilesChange: (files: PickedFile[]) => void;
   savedFiles: ReadonlySet<PickedFile>;
+  offline: boolean;
+  pickAgain: readonly string[];
   serverFieldErrors?: Record<string, string>;
-  // Shown just above the submit button: what went wrong the last time it was pressed.
-  beforeSubmit?: ReactNode;
-  onSubmit: (body: RequestBody, files: PickedFile[]) => void;
+  // Shown above the buttons on every step: uploads under way and what went wrong the last time.
+  status?: ReactNode;
+  saving: boolean;
+  draftNotice: DraftNotice | null;
+  onKeep: (values: FilingFormValues, step: FilingStep) => void;
+  onSaveDraft: (values: FilingFormValues, step: FilingStep) => void;
+  onSubmit: (body: RequestBody) => void;
 };
 
 const dataSheetMissing = 'Attach the substitute seal’s data sheet: a seal substitution cannot be filed without it.';
 
-export function RequestFilingForm({ projects, busy, progress, projectLocked, savedFiles, serverFieldErrors, beforeSubmit, onSubmit }: Props) {
-  const { control, handleSubmit, formState, setError, setValue, clearErrors } = useForm<FilingFormValues, unknown, RequestBody>({
+// The boxes the resolver complained about, by path ("deck.spansFt").
+function errorPaths(errors: FieldErrors, prefix = ''): string[] {
+  const out: string[] = [];
+  for (const [key, value] of Object.entries(errors)) {
+    if (key === 'root' || !value || typeof value !== 'object') continue;
+    const path = prefix ? `${prefix}.${key}` : key;
+    if (typeof (value as { type?: unknown }).type === 'string') out.push(path);
+    else out.push(...errorPaths(value as FieldErrors, path));
+  }
+  return out;
+}
+
+export function RequestFilingForm(props: Props) {
+  const { projects, initialValues, initialStep, busy, progress, projectLocked, files, onFilesChange, savedFiles, offline, pickAgain } = props;
+  const { serverFieldErrors, status, saving, draftNotice, onKeep, onSaveDraft, onSubmit } = props;
+  const { control, handleSubmit, formState, setError, setValue, clearErrors, trigger, getValues, watch, setFocus } = useForm<FilingFormValues, unknown, RequestBody>({
     resolver: zodResolver(filingSchema),
     mode: 'onTouched',
-    defaultValues: emptyFiling('other_deviation', projects.length === 1 ? projects[0]!.id : ''),
+    defaultValues: initialValues,
   });
-  const [files, setFiles] = useState<PickedFile[]>([]);
+  const [steps, dispatch] = useReducer(stepReducer, initialStep, (step) => (step === 'kind' ? firstStep : { step, reached: step }));
+  const [refused, setRefused] = useState(false);
   const [filesMissing, setFilesMissing] = useState<string | null>(null);
+  const focusAfterMove = useRef<string | null>(null);
+  const top = useRef<View>(null);
+  const stepNow = useRef(steps.step);
+  stepNow.current = steps.step;
   const type = useWatch({ control, name: 'type' });
   const errors = formState.errors;
   const needsDataSheet = type === 'joint_seal_substitution';
 
-  // A refusal from the server lands on the field it names.
+  // Every change is offered to the device copy; the screen decides when to write it.
   useEffect(() => {
+    const sub = watch(() => onKeep(getValues(), stepNow.current));
+    return () => sub.unsubscribe();
+  }, [watch, getValues, onKeep]);
+
+  // A new step starts at its heading, not wherever the last one was scrolled to.
+  useEffect(() => {
+    onKeep(getValues(), steps.step);
+    const el = top.current as unknown as { scrollIntoView?: (o?: object) => void } | null;
+    el?.scrollIntoView?.({ block: 'start' });
+    const field = focusAfterMove.current;
+    focusAfterMove.current = null;
+    if (field) setTimeout(() => { try { setFocus(field as FieldPath<FilingFormValues>); } catch { /* a choice, not a box that takes focus */ } }, 0);
+  }, [steps.step, getValues, onKeep, setFocus]);
+
+  // A refusal from the server lands on the box it names, and the person is taken to its step.
+  useEffect(() => {
+    const placed: string[] = [];
     for (const [path, message] of Object.entries(serverFieldErrors ?? {})) {
       const field = fieldFor(path.split('.'));
-      if (field) setError(field as FieldPath<FilingFormValues>, { type: 'server', message });
+      if (!field) continue;
+      setError(field as FieldPath<FilingFormValues>, { type: 'server', message });
+      placed.push(field);
     }
-  }, [serverFieldErrors, setError]);
+    const kind = getValues('type');
+    const step = earliestStep(placed, kind);
+    if (step) {
+      focusAfterMove.current = placed.find((f) => stepOfField(f, kind) === step) ?? null;
+      setRefused(true);
+      dispatch({ type: 'goTo', step });
+    }
+  }, [serverFieldErrors, setError, getValues]);
+
+  function goTo(step: FilingStep) {
+    setRefused(false);
+    dispatch({ type: 'goTo', step });
+  }
 
   function chooseType(next: RequestType) {
     setValue('type', next);
@@ -66,47 +130,106 @@ export function RequestFilingForm({ projects, busy, progress, projectLocked, sav
   }
 
   // Said at every press, not only once the rest is right, so the missing sheet is not a surprise at the end.
-  const dataSheetLacking = () => type === 'joint_seal_substitution' && files.length === 0;
-  const submit = handleSubmit(
+  const dataSheetLacking = () => getValues('type') === 'joint_seal_substitution' && files.length === 0;
+
+  async function next() {
+    const step = steps.step;
+    const names = stepFields(step, getValues('type'));
+    let ok = names.length === 0 || (await trigger(names as FieldPath<FilingFormValues>[], { shouldFocus: true }));
+    if (step === 'files') {
+      const lacking = dataSheetLacking();
+      setFilesMissing(lacking ? dataSheetMissing : null);
+      ok = ok && !lacking;
+    }
+    setRefused(!ok);
+    if (ok) dispatch({ type: 'next' });
+  }
+
+  const file = handleSubmit(
     (body) => {
       if (dataSheetLacking()) {
         setFilesMissing(dataSheetMissing);
+        setRefused(true);
+        dispatch({ type: 'goTo', step: 'files' });
         return;
       }
       setFilesMissing(null);
-      onSubmit(body, files);
+      setRefused(false);
+      onSubmit(body);
     },
-    () => setFilesMissing(dataSheetLacking() ? dataSheetMissing : null),
+    (found) => {
+      setRefused(true);
+      setFilesMissing(dataSheetLacking() ? dataSheetMissing : null);
+      const kind = getValues('type');
+      const paths = errorPaths(found);
+      const step = earliestStep(paths, kind);
+      if (step && step !== 'review') {
+        focusAfterMove.current = paths.find((f) => stepOfField(f, kind) === step) ?? null;
+        dispatch({ type: 'goTo', step });
+      }
+    },
   );
 
-  const hasErrors = (Object.keys(errors).length > 0 && formState.isSubmitted) || filesMissing !== null;
+  const shown = stepFields(steps.step, type);
+  const stepHasErrors = shown.some((name) => get(errors, name)) || (steps.step === 'review' && Object.keys(errors).length > 0);
+  const needsAttention = refused && (stepHasErrors || (filesMissing !== null && files.length === 0));
 
   return (
     <View style={styles.form}>
-      <TypeChooser value={type} onChange={chooseType} locked={projectLocked} />
-      <WhatAndWhere control={control} projects={projects} projectLocked={projectLocked} />
-      {type === 'deck_placement_change' ? <DeckPlacementFields control={control} /> : null}
-      {type === 'construction_joint_relocation' ? <ConstructionJointFields control={control} /> : null}
-      {type === 'joint_seal_substitution' ? <SealSubstitutionFields control={control} /> : null}
-      <LiveEngineeringCheck control={control} />
-      <TheChange control={control} />
-      <ScheduleAndCost control={control} />
-      <FilesSection files={files} onChange={setFiles} savedFiles={savedFiles} needsDataSheet={needsDataSheet} missing={filesMissing} />
+      <StepIndicator ref={top} step={steps.step} />
 
-      {errors.root?.message ? <FieldError message={errors.root.message} /> : null}
-      {hasErrors ? <FieldError message="Some fields need attention; they are marked in red above." testID="filing-needs-attention" /> : null}
-      {beforeSubmit}
-      <View style={styles.group}>
-        <Button label="File the request" busy={busy} onPress={submit} testID="filing-submit" />
-        {busy && progress ? <Text variant="muted" style={styles.progress} accessibilityLiveRegion="polite">{progress}</Text> : null}
-        <Text variant="muted" style={styles.progress}>It goes to the section engineer of the project, who is told by e-mail.</Text>
-      </View>
+      {steps.step === 'kind' ? <TypeChooser value={type} onChange={chooseType} locked={projectLocked} /> : null}
+      {steps.step === 'where' ? <WhatAndWhere control={control} projects={projects} projectLocked={projectLocked} /> : null}
+      {steps.step === 'departure' ? (
+        <>
+          {type === 'deck_placement_change' ? <DeckPlacementFields control={control} /> : null}
+          {type === 'construction_joint_relocation' ? <ConstructionJointFields control={control} /> : null}
+          {type === 'joint_seal_substitution' ? <SealSubstitutionFields control={control} /> : null}
+          <LiveEngineeringCheck control={control} />
+          <TheChange control={control} />
+          <ScheduleAndCost control={control} />
+        </>
+      ) : null}
+      {steps.step === 'files' ? (
+        <FilesSection
+          files={files}
+          onChange={onFilesChange}
+          savedFiles={savedFiles}
+          needsDataSheet={needsDataSheet}
+          missing={filesMissing}
+          offline={offline}
+          pickAgain={pickAgain}
+        />
+      ) : null}
+      {steps.step === 'review' ? (
+        <>
+          <ReviewStep control={control} projects={projects} files={files} onChange={goTo} />
+          <LiveEngineeringCheck control={control} />
+        </>
+      ) : null}
+
+      {errors.root?.message && steps.step === 'review' ? <FieldError message={errors.root.message} /> : null}
+      {needsAttention ? <FieldError message="Some fields need attention; they are marked in red above." testID="filing-needs-attention" /> : null}
+      {status}
+      <StepNav
+        first={steps.step === 'kind'}
+        last={steps.step === 'review'}
+        busy={busy}
+        progress={progress}
+        saving={saving}
+        draftNotice={draftNotice}
+        onBack={() => {
+          setRefused(false);
+          dispatch({ type: 'back' });
+        }}
+        onNext={() => void next()}
+        onFile={() => void file()}
+        onSaveDraft={() => onSaveDraft(getValues(), steps.step)}
+      />
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   form: { gap: space.xl },
-  group: { gap: space.sm },
-  progress: { textAlign: 'center' },
 });

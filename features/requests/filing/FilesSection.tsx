@@ -5,6 +5,7 @@ import { StyleSheet, View } from 'react-native';
 import { uploadLimits } from '../../../shared/requests/filing';
 import { Button } from '../../ui/Button';
 import { FieldError } from '../../ui/Choice';
+import { Notice } from '../../ui/Notice';
 import { Text } from '../../ui/Text';
 import { colors, radius, space } from '../../ui/theme';
 import type { PickedFile } from '../api';
@@ -18,10 +19,18 @@ type Props = {
   needsDataSheet: boolean;
   // Set by the form when it refused to file for want of a file.
   missing?: string | null;
+  // Files cannot be uploaded without a connection; they wait here until the request is filed.
+  offline?: boolean;
+  // Names of files picked before the page was closed: the files themselves are not kept on the device.
+  pickAgain?: readonly string[];
 };
 
-export function FilesSection({ files, onChange, savedFiles, needsDataSheet, missing }: Props) {
+const offlineWords =
+  'You are offline, so files cannot be uploaded now. The files you add stay listed here and are uploaded when you file the request with the connection back. If this page is closed or reloaded before then, you will need to pick them again.';
+
+export function FilesSection({ files, onChange, savedFiles, needsDataSheet, missing, offline, pickAgain = [] }: Props) {
   const [fileError, setFileError] = useState<string | null>(null);
+  const stillToPick = pickAgain.filter((name) => !files.some((f) => f.name === name));
 
   async function addFiles() {
     const picked = await pickFiles();
@@ -42,8 +51,14 @@ export function FilesSection({ files, onChange, savedFiles, needsDataSheet, miss
       <Text variant="heading" accessibilityRole="header">Drawings, photos and documents</Text>
       <Text variant="muted">
         {needsDataSheet ? 'The substitute seal’s data sheet is required. ' : ''}
-        Marked-up plan sheets, sketches or photos that show the change. Up to {uploadLimits.maxFilesPerRequest} files, {formatBytes(uploadLimits.maxFileBytes)} each.
+        Marked-up plan sheets, sketches or photos that show the change. Up to {uploadLimits.maxFilesPerRequest} files, {formatBytes(uploadLimits.maxFileBytes)} each. They are uploaded when you file the request.
       </Text>
+      {offline ? <Notice tone="caution" testID="filing-files-offline">{offlineWords}</Notice> : null}
+      {stillToPick.length > 0 ? (
+        <Notice tone="caution" testID="filing-files-pick-again">
+          {`Before the page was closed you had picked ${stillToPick.map((n) => `“${n}”`).join(', ')}. Files are not kept on this device; add ${stillToPick.length === 1 ? 'it' : 'them'} again.`}
+        </Notice>
+      ) : null}
       {files.map((f, i) => (
         <View key={`${f.name}-${i}`} style={styles.fileRow} testID="filing-file">
           <Text style={styles.fileName} numberOfLines={1}>{f.name}</Text>

@@ -16,6 +16,9 @@ const formFields: string[] = [];
 leaves(emptyFiling('other_deviation', ''), '', formFields);
 const known = new Set(formFields);
 
+/** Every box of the form by its path ("location.description"), in the order the values declare them. */
+export const filingFieldNames: readonly string[] = formFields;
+
 // A complaint about a whole group (missing, or the wrong kind of thing) goes to its first box.
 const groupHome: Record<string, string> = {
   location: 'location.description',
