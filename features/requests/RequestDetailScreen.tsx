@@ -1,11 +1,15 @@
 // One request: what it asks, its files and conditions, the trail, and what this person may do now.
 // On a wide screen the reading goes on the left and the move and the record on the right.
 import { useLocalSearchParams } from 'expo-router';
-import { ActivityIndicator, Linking, Platform, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { useState } from 'react';
+import { ActivityIndicator, Linking, Platform, StyleSheet, View } from 'react-native';
 import { stateLabel } from '../../shared/requests/states';
 import type { AttachmentSummary, ConditionView, RequestDetail } from '../../shared/requests/types';
+import { ApiError } from '../api/http';
 import { useActor } from '../auth/useActor';
+import { useBreakpoint } from '../ui/breakpoints';
 import { Button } from '../ui/Button';
+import { Choice } from '../ui/Choice';
 import { Notice } from '../ui/Notice';
 import { AttachmentThumbnail } from '../uploads/AttachmentThumbnail';
 import { Panel } from '../ui/Panel';
@@ -17,8 +21,6 @@ import { attachmentUrl, useRequestDetail } from './api';
 import { formatBytes, formatWhen, requestTypeLabel } from './format';
 import { RequestBodyView } from './RequestBodyView';
 import { TrailTimeline } from './TrailTimeline';
-
-const twoColumnsFrom = 1024;
 
 function openAttachment(id: string) {
   const url = attachmentUrl(id);
@@ -98,20 +100,57 @@ function Conditions({ conditions }: { conditions: ConditionView[] }) {
   );
 }
 
-export function RequestDetailScreen() {
-  const { id, filed } = useLocalSearchParams<{ id: string; filed?: string }>();
-  const request = useRequestDetail(String(id));
-  const { data: actor } = useActor();
-  const { width } = useWindowDimensions();
+// Which revision the reader is looking at: the current one unless they pick an earlier one.
+function RevisionPicker({ r, shown, onPick }: { r: RequestDetail; shown: number; onPick: (revision: number) => void }) {
+  if (r.revisions.length < 2) return null;
+  return (
+    <View style={styles.revisions} accessibilityRole="radiogroup" accessibilityLabel="Revision shown" testID="request-revisions">
+      <Text variant="label">Revisions</Text>
+      <View style={styles.revisionRow}>
+        {r.revisions.map((v) => (
+          <Choice
+            key={v.revision}
+            compact
+            label={`Revision ${v.revision}${v.revision === r.currentRevision ? ' (current)' : ''}`}
+            detail={v.submittedAt ? `Filed ${formatWhen(v.submittedAt)}` : 'Not filed yet'}
+            chosen={shown === v.revision}
+            onPress={() => onPick(v.revision)}
+            testID={`request-revision-${v.revision}`}
+          />
+        ))}
+      </View>
+    </View>
+  );
+}
 
-  if (request.isPending) return <Screen><ActivityIndicator /></Screen>;
-  if (request.error) return <Screen><Notice tone="error">{request.error.message}</Notice></Screen>;
+// The request itself, as a page of its own or in the pane beside a list on a wide screen. A page on
+// a wide screen reads on the left and acts on the right; a pane is one column.
+export function RequestDetailView({ id, inPane = false, filed = false }: { id: string; inPane?: boolean; filed?: boolean }) {
+  const request = useRequestDetail(id);
+  const { data: actor } = useActor();
+  const { isWide } = useBreakpoint();
+  const [picked, setPicked] = useState<number | null>(null);
+
+  if (request.isPending) return <View style={styles.loading} testID="request-loading"><ActivityIndicator /><Text variant="muted">Loading the request…</Text></View>;
+  if (request.error) {
+    return (
+      <View style={styles.loading}>
+        <Notice tone="error">{request.error.message}</Notice>
+        {/* A missing request stays missing; a dropped connection may come back. */}
+        {request.error instanceof ApiError && request.error.status >= 400 && request.error.status < 500 ? null : (
+          <Button kind="secondary" label="Try again" onPress={() => void request.refetch()} />
+        )}
+      </View>
+    );
+  }
   const r = request.data;
-  const revision = r.revisions.find((v) => v.revision === r.currentRevision) ?? r.revisions[r.revisions.length - 1];
-  const wide = width >= twoColumnsFrom;
+  const shown = picked ?? r.currentRevision;
+  const revision = r.revisions.find((v) => v.revision === shown) ?? r.revisions[r.revisions.length - 1];
+  const twoColumns = isWide && !inPane;
 
   const reading = (
     <>
+      <RevisionPicker r={r} shown={shown} onPick={(v) => setPicked(v === r.currentRevision ? null : v)} />
       {revision ? <RequestBodyView revision={revision} /> : <Notice tone="info">This request has no revision to show.</Notice>}
       <Conditions conditions={r.conditions} />
       <Attachments files={r.attachments} />
@@ -125,13 +164,13 @@ export function RequestDetailScreen() {
   );
 
   return (
-    <Screen wide={wide}>
+    <View style={styles.view}>
       <Header r={r} />
-      {filed === '1' && r.state === 'section_review' ? (
+      {filed && r.state === 'section_review' ? (
         <Notice tone="ok" testID="request-filed">The request is filed. It is with the section engineer, who has been told by e-mail; you are told by e-mail when it comes back to you or is decided.</Notice>
       ) : null}
       {request.isRefetching ? <Text variant="muted" accessibilityLiveRegion="polite">Checking for changes…</Text> : null}
-      {wide ? (
+      {twoColumns ? (
         <View style={styles.columns}>
           <View style={styles.main}>{reading}</View>
           <View style={styles.side}>{acting}</View>
@@ -142,11 +181,25 @@ export function RequestDetailScreen() {
           {acting}
         </>
       )}
+    </View>
+  );
+}
+
+export function RequestDetailScreen() {
+  const { id, filed } = useLocalSearchParams<{ id: string; filed?: string }>();
+  const { isWide } = useBreakpoint();
+  return (
+    <Screen wide={isWide}>
+      <RequestDetailView id={String(id)} filed={filed === '1'} />
     </Screen>
   );
 }
 
 const styles = StyleSheet.create({
+  view: { gap: space.lg },
+  loading: { gap: space.md, padding: space.lg, alignItems: 'flex-start' },
+  revisions: { gap: space.sm },
+  revisionRow: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   header: { gap: space.xs },
   headerTop: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: space.sm, flexWrap: 'wrap' },
   state: { backgroundColor: colors.slateLight, borderRadius: 999, paddingHorizontal: space.md, paddingVertical: space.xs },

@@ -10,7 +10,7 @@ import { Notice } from '../ui/Notice';
 import { Panel } from '../ui/Panel';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
-import { useTrailCheck } from './api';
+import { pendingTrailHash, useTrailCheck } from './api';
 import { formatWhen } from './format';
 
 function whatHappened(e: TrailEntry): string {
@@ -27,16 +27,17 @@ function whatHappened(e: TrailEntry): string {
   return said;
 }
 
-export function TrailTimeline({ requestId, trail }: { requestId: string; trail: TrailEntry[] }) {
+// `showCheck` off where the screen around it shows the chain check itself (the auditor's trail view).
+export function TrailTimeline({ requestId, trail, showCheck = true }: { requestId: string; trail: TrailEntry[]; showCheck?: boolean }) {
   const check = useTrailCheck(requestId);
-  const result = check.data;
+  const result = showCheck ? check.data : undefined;
   return (
     <Panel
       title="Trail"
       testID="request-trail"
-      aside={<Button kind="quiet" label="Check the chain" busy={check.isFetching} onPress={() => void check.refetch()} testID="trail-verify" />}
+      aside={showCheck ? <Button kind="quiet" label="Check the chain" busy={check.isFetching} onPress={() => void check.refetch()} testID="trail-verify" /> : undefined}
     >
-      {check.error ? <Notice tone="error">{check.error.message}</Notice> : null}
+      {showCheck && check.error ? <Notice tone="error">{check.error.message}</Notice> : null}
       {result && !check.isFetching ? (
         result.ok ? (
           <Notice tone="ok" testID="trail-verify-result">{`All ${result.events} entries link up; none has been changed or removed.`}</Notice>
@@ -61,6 +62,7 @@ export function TrailTimeline({ requestId, trail }: { requestId: string; trail: 
                 </Text>
                 <Text>{whatHappened(e)}</Text>
                 {moved ? <Text variant="muted">Now: {stateLabel(e.stateAfter)}</Text> : null}
+                {e.hash === pendingTrailHash ? <Text variant="muted" testID="trail-entry-sending">Sending…</Text> : null}
                 {e.comment ? (
                   <View style={styles.comment}>
                     <Text>{e.comment}</Text>

@@ -1,12 +1,14 @@
 // Queries and mutations for requests and projects: one key factory, invalidation on success.
 import { useInfiniteQuery, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import type { RequestListQuery } from '../../shared/requests/listQuery';
+import type { RequestCounts, RequestFilterQuery, RequestListQuery } from '../../shared/requests/listQuery';
 import type { RequestDraft } from '../../shared/requests/requestBody';
-import type { ProjectSummary, RequestDetail, RequestPage, RequestSummary } from '../../shared/requests/types';
+import type { Actor, ProjectSummary, RequestDetail, RequestPage, RequestSummary, TrailEntry } from '../../shared/requests/types';
 import type { WorkflowEventInput } from '../../shared/workflow/events';
 import { ApiError, apiFetch } from '../api/http';
+import { actorKey } from '../auth/useActor';
 
 export type RequestListFilters = Omit<Partial<RequestListQuery>, 'cursor'>;
+export type RequestCountFilters = Partial<RequestFilterQuery>;
 export type PersonOption = { id: string; name: string; email: string; organization: string | null };
 export type TrailCheck = { ok: true; events: number } | { ok: false; brokenAt: number };
 
@@ -14,6 +16,8 @@ export const requestKeys = {
   all: ['requests'] as const,
   lists: () => ['requests', 'list'] as const,
   list: (filters: RequestListFilters) => ['requests', 'list', filters] as const,
+  // Under 'list', so whatever makes the lists stale makes the counts stale too.
+  counts: (filters: RequestCountFilters) => ['requests', 'list', 'counts', filters] as const,
   detail: (id: string) => ['requests', 'detail', id] as const,
   engineersOfRecord: (id: string) => ['requests', 'detail', id, 'engineers-of-record'] as const,
   trailCheck: (id: string) => ['requests', 'detail', id, 'trail-check'] as const,
@@ -26,25 +30,33 @@ function sendJson<T>(path: string, method: 'POST' | 'PUT', body: unknown): Promi
   return apiFetch<T>(path, { method, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
 }
 
-function listPath(filters: RequestListFilters, cursor: string | undefined): string {
+function listPath(base: string, filters: RequestCountFilters, cursor?: string): string {
   const params = new URLSearchParams();
   for (const [key, value] of Object.entries(filters)) if (value !== undefined && value !== '') params.set(key, String(value));
   if (cursor) params.set('cursor', cursor);
   const query = params.toString();
-  return query ? `/api/requests?${query}` : '/api/requests';
+  return query ? `${base}?${query}` : base;
 }
 
 // Pages come oldest-at-desk first; `items` is every page loaded so far, in that order.
 export function useRequestList(filters: RequestListFilters) {
   const query = useInfiniteQuery({
     queryKey: requestKeys.list(filters),
-    queryFn: ({ pageParam }) => apiFetch<RequestPage>(listPath(filters, pageParam)),
+    queryFn: ({ pageParam }) => apiFetch<RequestPage>(listPath('/api/requests', filters, pageParam)),
     initialPageParam: undefined as string | undefined,
     getNextPageParam: (last) => last.nextCursor ?? undefined,
     staleTime: 15_000,
   });
   const items: RequestSummary[] = query.data?.pages.flatMap((p) => p.items) ?? [];
   return { ...query, items };
+}
+
+export function useRequestCounts(filters: RequestCountFilters) {
+  return useQuery({
+    queryKey: requestKeys.counts(filters),
+    queryFn: () => apiFetch<RequestCounts>(listPath('/api/requests/counts', filters)),
+    staleTime: 15_000,
+  });
 }
 
 export function useRequestDetail(id: string) {
@@ -116,10 +128,39 @@ export function useWorkflowEvent() {
   });
 }
 
+// A provisional trail entry shows the comment at once; it has no hash until the server answers.
+export const pendingTrailHash = '';
+
 export function useAddComment() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ id, comment }: { id: string; comment: string }) => sendJson<RequestDetail>(`${requestPath(id)}/comments`, 'POST', { comment }),
+    onMutate: async ({ id, comment }) => {
+      const key = requestKeys.detail(id);
+      await queryClient.cancelQueries({ queryKey: key });
+      const before = queryClient.getQueryData<RequestDetail>(key);
+      const actor = queryClient.getQueryData<Actor | null>(actorKey);
+      if (before && actor) {
+        const last = before.trail[before.trail.length - 1];
+        const provisional: TrailEntry = {
+          seq: (last?.seq ?? 0) + 1,
+          eventType: 'commented',
+          stateBefore: before.state,
+          stateAfter: before.state,
+          actor: { id: actor.id, name: actor.name, organization: actor.organization },
+          actorRole: actor.role,
+          comment,
+          payload: {},
+          at: new Date().toISOString(),
+          hash: pendingTrailHash,
+        };
+        queryClient.setQueryData<RequestDetail>(key, { ...before, trail: [...before.trail, provisional] });
+      }
+      return { before };
+    },
+    onError: (_err, { id }, context) => {
+      if (context?.before) queryClient.setQueryData(requestKeys.detail(id), context.before);
+    },
     onSuccess: (detail) => settle(queryClient, detail),
   });
 }

@@ -45,3 +45,25 @@ export function isRequestType(value: string): value is RequestType {
 export function requestTypeLabel(type: string): string {
   return isRequestType(type) ? requestTypeLabels[type] : type;
 }
+
+const minuteMs = 60_000;
+const hourMs = 60 * minuteMs;
+const dayMs = 24 * hourMs;
+
+// A span of waiting in the largest unit that keeps it honest: "40 minutes", "5 hours", "3 days".
+export function formatSpan(ms: number): string {
+  const plural = (n: number, unit: string) => `${n} ${unit}${n === 1 ? '' : 's'}`;
+  const abs = Math.max(0, ms);
+  if (abs < hourMs) return plural(Math.max(1, Math.floor(abs / minuteMs)), 'minute');
+  if (abs < 2 * dayMs) return plural(Math.floor(abs / hourMs), 'hour');
+  return plural(Math.floor(abs / dayMs), 'day');
+}
+
+// What a card says about the desk clock: how long it has waited and when it falls due.
+export function deskClockText(r: { deskSince: string; dueAt: string | null; overdue: boolean }, now: number = Date.now()): { waited: string; due: string | null } {
+  const waited = `${formatSpan(now - new Date(r.deskSince).getTime())} at this desk`;
+  if (!r.dueAt) return { waited, due: null };
+  const dueMs = new Date(r.dueAt).getTime();
+  const day = new Date(r.dueAt).toLocaleDateString(undefined, { weekday: 'short', month: 'short', day: 'numeric' });
+  return { waited, due: r.overdue ? `overdue by ${formatSpan(now - dueMs)} (due ${day})` : `due ${day}` };
+}
