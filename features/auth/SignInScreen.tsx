@@ -1,9 +1,7 @@
 import { Redirect, useLocalSearchParams } from 'expo-router';
-import { View, StyleSheet } from 'react-native';
 import { Notice } from '../ui/Notice';
-import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
-import { colors, radius, space } from '../ui/theme';
+import { AuthCard, AuthLink } from './AuthCard';
 import { SignInForm } from './SignInForm';
 import { useActor, useSignIn } from './useActor';
 
@@ -20,28 +18,11 @@ export function SignInScreen() {
   if (actor.data) return <Redirect href={safeNext(next)} />;
 
   return (
-    <Screen>
-      <View style={styles.card}>
-        <Text variant="title">Spanrelay</Text>
-        <Text variant="muted">Approval of departures from sealed bridge plans, desk to desk, on the record.</Text>
-        {signIn.error ? <Notice tone="error">{signIn.error.message}</Notice> : null}
-        <SignInForm busy={signIn.isPending} onSubmit={(values) => signIn.mutate(values)} />
-      </View>
-    </Screen>
+    <AuthCard title="Spanrelay">
+      <Text variant="muted">Approval of departures from sealed bridge plans, desk to desk, on the record.</Text>
+      {signIn.error ? <Notice tone="error">{signIn.error.message}</Notice> : null}
+      <SignInForm busy={signIn.isPending} onSubmit={(values) => signIn.mutate(values)} />
+      <AuthLink href="/forgot-password" label="Forgot your password?" testID="sign-in-forgot" />
+    </AuthCard>
   );
 }
-
-const styles = StyleSheet.create({
-  card: {
-    backgroundColor: colors.surface,
-    borderRadius: radius,
-    borderWidth: 1,
-    borderColor: colors.line,
-    padding: space.xl,
-    gap: space.lg,
-    width: '100%',
-    maxWidth: 440,
-    alignSelf: 'center',
-    marginTop: space.xxl,
-  },
-});

@@ -23,13 +23,19 @@ export function passwordProblem(password: string, email: string): string | null 
 }
 
 // The form's version: typed twice, so a slip of the finger is caught before it locks someone out.
-export function newPasswordFormSchema(email: string | null) {
-  return z
-    .strictObject({ password: z.string(), confirm: z.string() })
-    .superRefine((value, ctx) => {
-      const problem = email ? passwordProblem(value.password, email) : passwordSchema.safeParse(value.password).error?.issues[0]?.message;
-      if (problem) ctx.addIssue({ code: 'custom', path: ['password'], message: problem });
-      if (value.confirm !== value.password) ctx.addIssue({ code: 'custom', path: ['confirm'], message: 'The two passwords differ.' });
-    });
-}
+export const newPasswordShape = { password: z.string(), confirm: z.string() };
 export type NewPasswordValues = { password: string; confirm: string };
+
+// Without the address (a reset link does not say whose it is) only the length can be checked here;
+// the server checks the rest.
+export function checkNewPassword(email: string | null) {
+  return (value: NewPasswordValues, ctx: z.RefinementCtx) => {
+    const problem = email ? passwordProblem(value.password, email) : passwordSchema.safeParse(value.password).error?.issues[0]?.message;
+    if (problem) ctx.addIssue({ code: 'custom', path: ['password'], message: problem });
+    if (value.confirm !== value.password) ctx.addIssue({ code: 'custom', path: ['confirm'], message: 'The two passwords differ.' });
+  };
+}
+
+export function newPasswordFormSchema(email: string | null) {
+  return z.strictObject(newPasswordShape).superRefine(checkNewPassword(email));
+}

@@ -2,7 +2,7 @@
 import { z } from 'zod';
 import { roles } from '../roles';
 import { deskRoles, type DeskRole } from '../workflow/desks';
-import { passwordSchema } from './password';
+import { checkNewPassword, newPasswordShape, passwordSchema } from './password';
 
 export const emailSchema = z.string().trim().toLowerCase().pipe(z.email('Enter a whole e-mail address, like name@agency.gov.'));
 const personName = z.string().trim().min(1, 'Enter the person’s name.').max(120, 'Keep the name under 120 characters.');
@@ -39,6 +39,12 @@ const token = z.string().trim().min(16, 'This link is incomplete; open it again 
 export const invitationTokenSchema = z.strictObject({ token });
 export const acceptInvitationSchema = z.strictObject({ token, name: personName, password: passwordSchema });
 export type AcceptInvitationInput = z.infer<typeof acceptInvitationSchema>;
+
+// The invited person's form: their name as they want it shown, and the password typed twice.
+export function acceptInvitationFormSchema(email: string) {
+  return z.strictObject({ name: personName, ...newPasswordShape }).superRefine(checkNewPassword(email));
+}
+export type AcceptInvitationValues = { name: string; password: string; confirm: string };
 
 export const forgotPasswordSchema = z.strictObject({ email: emailSchema });
 export type ForgotPasswordValues = z.infer<typeof forgotPasswordSchema>;

@@ -1,0 +1,1 @@
+export { AcceptInvitationScreen as default } from '../../features/auth/AcceptInvitationScreen';
