@@ -130,7 +130,7 @@ const styles = StyleSheet.create({
   sideBrand: { paddingHorizontal: space.sm },
   sideItems: { gap: space.xs, flex: 1 },
   sideItem: { flexDirection: 'row', alignItems: 'center', gap: space.md, minHeight: 44, paddingHorizontal: space.sm, borderRadius: radius },
-  sideItemActive: { backgroundColor: '#2E5670' },
+  sideItemActive: { backgroundColor: colors.slateActive },
   sideLabel: { fontSize: 16, fontFamily: fonts.medium },
   sideFoot: { gap: space.xs },
   badge: { position: 'absolute', top: -6, right: -12, minWidth: 20, height: 20, borderRadius: 10, backgroundColor: colors.danger, alignItems: 'center', justifyContent: 'center', paddingHorizontal: 4 },
