@@ -1,0 +1,1 @@
+export { RequestTrailScreen as default } from '../../../features/trail/RequestTrailScreen';

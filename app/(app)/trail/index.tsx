@@ -1,0 +1,1 @@
+export { TrailSearchScreen as default } from '../../../features/trail/TrailSearchScreen';
