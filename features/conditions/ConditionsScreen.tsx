@@ -7,6 +7,7 @@ import { recentlyMetDays } from '../../shared/conditions/listQuery';
 import type { ConditionListItem } from '../../shared/conditions/types';
 import type { RequestDetail } from '../../shared/requests/types';
 import { useActor } from '../auth/useActor';
+import { requestKeys } from '../requests/api';
 import { Button } from '../ui/Button';
 import { Choice } from '../ui/Choice';
 import { Notice } from '../ui/Notice';
@@ -72,6 +73,9 @@ export function ConditionsScreen() {
     } catch {
       now = undefined;
     }
+    // The open list and any request on screen are stale too (a refused upload refreshes nothing).
+    void queryClient.invalidateQueries({ queryKey: conditionKeys.all });
+    void queryClient.invalidateQueries({ queryKey: requestKeys.all });
     if (now?.condition.satisfied) {
       keep(now, { tone: 'caution', text: `${now.condition.satisfiedBy?.name ?? 'Someone else'} marked this condition satisfied while you were working, so yours was not recorded. A file you sent stays on the request.` });
     } else if (now) {

@@ -8,7 +8,11 @@ export type RequestGroup = { request: ConditionListItem['request']; approvedAt: 
 
 export function groupByRequest(fetched: ConditionListItem[], kept: ConditionListItem[]): RequestGroup[] {
   const byCondition = new Map(fetched.map((i) => [i.condition.id, i]));
-  for (const k of kept) if (!byCondition.has(k.condition.id)) byCondition.set(k.condition.id, k);
+  // Whichever copy saw the later version of its request is the truer one.
+  for (const k of kept) {
+    const f = byCondition.get(k.condition.id);
+    if (!f || k.request.version > f.request.version) byCondition.set(k.condition.id, k);
+  }
   const groups = new Map<string, RequestGroup>();
   for (const item of byCondition.values()) {
     const g = groups.get(item.request.id);
