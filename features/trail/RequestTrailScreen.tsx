@@ -3,12 +3,13 @@
 // and the files stay on the right.
 import { Link, useLocalSearchParams, useRouter } from 'expo-router';
 import { useEffect } from 'react';
-import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { stateLabel } from '../../shared/requests/states';
 import type { RequestDetail } from '../../shared/requests/types';
 import { trailDecisionLabels, type TrailDecision } from '../../shared/trail/trailSearch';
 import { useRequestDetail, useTrailCheck } from '../requests/api';
 import { TrailTimeline } from '../requests/TrailTimeline';
+import { useBreakpoint } from '../ui/breakpoints';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Panel } from '../ui/Panel';
@@ -17,8 +18,6 @@ import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
 import { decisionRecordUrl, trailCsvUrl } from './api';
 import { useDownload } from './useDownload';
-
-const besideFrom = 1024;
 
 function ChainCheck({ r }: { r: RequestDetail }) {
   const check = useTrailCheck(r.id);
@@ -91,8 +90,8 @@ export function RequestTrailScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
   const router = useRouter();
   const request = useRequestDetail(String(id));
-  const { width } = useWindowDimensions();
-  const beside = width >= besideFrom;
+  const { isWide } = useBreakpoint();
+  const beside = isWide;
   const back = () => (router.canGoBack() ? router.back() : router.replace('/trail'));
 
   let body;

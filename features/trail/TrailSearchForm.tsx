@@ -6,8 +6,7 @@ import { Controller, useForm, type FieldPath, type Resolver } from 'react-hook-f
 import { StyleSheet, View } from 'react-native';
 import { trailDecisionLabels, trailDecisions, trailSearchQuerySchema } from '../../shared/trail/trailSearch';
 import { Button } from '../ui/Button';
-import { Choice } from '../ui/Choice';
-import { Text } from '../ui/Text';
+import { ChipGroup } from '../ui/ChipGroup';
 import { TextField } from '../ui/TextField';
 import { space } from '../ui/theme';
 import { emptySearch, filterNames, filtersOf, type TrailSearchValues } from './searchFilters';
@@ -106,22 +105,13 @@ export function TrailSearchForm({ initial, onSearch, busy, serverFields }: Props
         control={control}
         name="decision"
         render={({ field }) => (
-          <View style={styles.decision} accessibilityRole="radiogroup" accessibilityLabel="Decision">
-            <Text variant="label">Decision</Text>
-            <View style={styles.choices}>
-              {(['', ...trailDecisions] as const).map((value) => (
-                <View key={value || 'any'} style={styles.choice}>
-                  <Choice
-                    compact
-                    label={value ? trailDecisionLabels[value] : 'Any'}
-                    chosen={field.value === value}
-                    onPress={() => field.onChange(value)}
-                    testID={`trail-search-decision-${value || 'any'}`}
-                  />
-                </View>
-              ))}
-            </View>
-          </View>
+          <ChipGroup
+            label="Decision"
+            options={trailDecisions.map((value) => ({ value, label: trailDecisionLabels[value] }))}
+            value={field.value || undefined}
+            onChange={(value) => field.onChange(value ?? '')}
+            testID="trail-search-decision"
+          />
         )}
       />
       <View style={styles.buttons}>
@@ -136,8 +126,5 @@ const styles = StyleSheet.create({
   form: { gap: space.lg },
   dates: { flexDirection: 'row', gap: space.md, flexWrap: 'wrap' },
   date: { flexGrow: 1, flexBasis: 140 },
-  decision: { gap: space.sm },
-  choices: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  choice: { flexGrow: 1, flexBasis: 150 },
   buttons: { flexDirection: 'row', gap: space.md, flexWrap: 'wrap' },
 });

@@ -3,9 +3,10 @@
 // coming back from a trail, reloading or sharing the link keeps it.
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useState } from 'react';
-import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { useActor } from '../auth/useActor';
 import { ApiError } from '../api/http';
+import { useBreakpoint } from '../ui/breakpoints';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Panel } from '../ui/Panel';
@@ -17,18 +18,16 @@ import { describeFilters, filterNames, filtersOf, forApi, valuesOf, type TrailSe
 import { TrailResultCard } from './TrailResultCard';
 import { TrailSearchForm } from './TrailSearchForm';
 
-const formBesideResultsFrom = 1024;
-
 export function TrailSearchScreen() {
   const router = useRouter();
   const params = useLocalSearchParams<Record<string, string>>();
-  const { width } = useWindowDimensions();
+  const { isWide } = useBreakpoint();
   const { data: actor } = useActor();
   const values = valuesOf(params);
   const filters = filtersOf(values);
   const search = useTrailSearch(forApi(filters));
   const searchKey = JSON.stringify(filters);
-  const wide = width >= formBesideResultsFrom;
+  const wide = isWide;
 
   const [filtersOpen, setFiltersOpen] = useState(false);
 

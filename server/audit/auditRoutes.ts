@@ -1,5 +1,5 @@
 // HTTP for the auditor's trail: search, and a request's trail and decision record as files.
-import { Router } from 'express';
+import { Router, type Response } from 'express';
 import { z } from 'zod';
 import type { Database } from '../../db/client';
 import { trailSearchQuerySchema } from '../../shared/trail/trailSearch';
@@ -15,7 +15,13 @@ function requestId(value: unknown): string {
   return parsed.data;
 }
 
-const attachment = (fileName: string) => `attachment; filename="${fileName}"`;
+// A file to save, never to show in place; made fresh for each asking.
+function sendFile(res: Response, contentType: string, fileName: string, body: string | Buffer) {
+  res.setHeader('content-type', contentType);
+  res.setHeader('content-disposition', `attachment; filename="${fileName}"`);
+  res.setHeader('cache-control', 'no-store');
+  res.send(body);
+}
 
 export function auditRoutes(db: Database): Router {
   const router = Router();
@@ -28,18 +34,12 @@ export function auditRoutes(db: Database): Router {
 
   router.get('/api/requests/:id/trail.csv', async (req, res) => {
     const { fileName, csv } = await trailCsvFor(db, actorOf(req), requestId(req.params.id));
-    res.setHeader('content-type', 'text/csv; charset=utf-8; header=present');
-    res.setHeader('content-disposition', attachment(fileName));
-    res.setHeader('cache-control', 'no-store');
-    res.send(csv);
+    sendFile(res, 'text/csv; charset=utf-8; header=present', fileName, csv);
   });
 
   router.get('/api/requests/:id/decision-record.pdf', async (req, res) => {
     const { fileName, pdf } = await decisionRecordFor(db, actorOf(req), requestId(req.params.id));
-    res.setHeader('content-type', 'application/pdf');
-    res.setHeader('content-disposition', attachment(fileName));
-    res.setHeader('cache-control', 'no-store');
-    res.send(pdf);
+    sendFile(res, 'application/pdf', fileName, pdf);
   });
 
   return router;
