@@ -12,8 +12,8 @@ export const destinations: readonly Destination[] = [
   { key: 'new', href: '/requests/new', label: 'New request', icon: 'newRequest', roles: ['contractor'] },
   { key: 'conditions', href: '/conditions', label: 'Conditions', icon: 'conditions', roles: ['field_inspector', 'section_engineer'] },
   { key: 'trail', href: '/trail', label: 'Trail', icon: 'trail', roles: ['auditor'] },
-  { key: 'register', href: '/register', label: 'Register', icon: 'register', roles: [...deskHolders, 'auditor', 'admin'] },
   { key: 'people', href: '/people', label: 'People', icon: 'people', roles: ['admin'] },
+  { key: 'register', href: '/register', label: 'Register', icon: 'register', roles: [...deskHolders, 'auditor', 'admin'] },
 ];
 
 export function destinationsFor(role: Role): Destination[] {
