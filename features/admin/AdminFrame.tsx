@@ -33,9 +33,10 @@ export function AdminFrame({ title, intro, children }: { title: string; intro: s
       <View style={styles.tabs} accessibilityLabel="People or projects">
         {tabs.map((tab) => {
           const current = pathname === tab.href;
+          // Flattened: a Link passing its child a style array fails on the web.
           return (
             <Link key={tab.href} href={tab.href} asChild>
-              <Pressable accessibilityRole="link" accessibilityState={{ selected: current }} testID={tab.testID} style={[styles.tab, current && styles.current]}>
+              <Pressable accessibilityRole="link" accessibilityState={{ selected: current }} testID={tab.testID} style={StyleSheet.flatten([styles.tab, current && styles.current])}>
                 <Text style={[styles.tabText, current && styles.currentText]}>{tab.label}</Text>
               </Pressable>
             </Link>

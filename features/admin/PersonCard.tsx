@@ -68,17 +68,15 @@ export function PersonCard({ person, isSelf }: { person: PersonRow; isSelf: bool
   const [saved, setSaved] = useState(false);
   return (
     <View style={styles.card} testID={`person-${person.email}`}>
-      <View style={styles.head}>
-        <View style={styles.who}>
-          <Text variant="label">{isSelf ? `${person.name} (you)` : person.name}</Text>
-          <Text variant="muted">{person.email}</Text>
-        </View>
-        {editing ? null : (
-          <Button kind="secondary" label="Change role" onPress={() => { setSaved(false); setEditing(true); }} testID={`person-edit-${person.email}`} />
-        )}
-      </View>
+      <Text variant="label">{isSelf ? `${person.name} (you)` : person.name}</Text>
+      <Text variant="muted">{person.email}</Text>
       <Text testID={`person-role-of-${person.email}`}>{[roleLabels[person.role], person.organization].filter(Boolean).join(' · ')}</Text>
       <Text variant="muted">{person.projects.length ? person.projects.map((p) => `${p.code} ${p.name}`).join('; ') : 'On no project yet: add them under Projects.'}</Text>
+      {editing ? null : (
+        <View style={styles.actions}>
+          <Button kind="secondary" label="Change role" onPress={() => { setSaved(false); setEditing(true); }} testID={`person-edit-${person.email}`} />
+        </View>
+      )}
       {saved ? <Notice tone="ok">Saved. The change applies from their next step in Spanrelay.</Notice> : null}
       {editing ? <PersonEditor person={person} isSelf={isSelf} onDone={(ok) => { setEditing(false); setSaved(ok); }} /> : null}
     </View>
@@ -87,8 +85,6 @@ export function PersonCard({ person, isSelf }: { person: PersonRow; isSelf: bool
 
 const styles = StyleSheet.create({
   card: { gap: space.xs, paddingVertical: space.md, borderTopWidth: 1, borderTopColor: colors.line },
-  head: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'center', gap: space.sm },
-  who: { flexShrink: 1, gap: 2 },
   editor: { gap: space.md, paddingTop: space.sm },
   group: { gap: space.sm },
   wrap: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
