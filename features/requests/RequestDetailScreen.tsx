@@ -22,8 +22,8 @@ import { formatBytes, formatWhen, requestTypeLabel } from './format';
 import { RequestBodyView } from './RequestBodyView';
 import { TrailTimeline } from './TrailTimeline';
 
-function openAttachment(id: string) {
-  const url = attachmentUrl(id);
+function openAttachment(id: string, download = false) {
+  const url = attachmentUrl(id, download);
   if (Platform.OS === 'web') window.open(url, '_blank', 'noopener');
   else void Linking.openURL(url);
 }
@@ -71,7 +71,10 @@ function Attachments({ files }: { files: AttachmentSummary[] }) {
             </Text>
             <Text variant="muted">SHA-256 {a.sha256.slice(0, 12)}…</Text>
           </View>
-          <Button kind="secondary" label="Open" onPress={() => openAttachment(a.id)} />
+          <View style={styles.fileButtons}>
+            <Button kind="secondary" label="Open" accessibilityLabel={`Open ${a.fileName}`} onPress={() => openAttachment(a.id)} testID="attachment-open" />
+            <Button kind="quiet" label="Download" accessibilityLabel={`Download ${a.fileName}`} onPress={() => openAttachment(a.id, true)} testID="attachment-download" />
+          </View>
         </View>
       ))}
     </Panel>
@@ -209,6 +212,7 @@ const styles = StyleSheet.create({
   side: { flex: 2, gap: space.lg, minWidth: 0 },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.md },
   grow: { flex: 1 },
+  fileButtons: { gap: space.xs },
   condition: { gap: 2, borderLeftWidth: 3, borderLeftColor: colors.line, paddingLeft: space.md },
   ok: { color: colors.ok },
   openText: { color: colors.caution },

@@ -165,6 +165,6 @@ export function useAddComment() {
   });
 }
 
-export function attachmentUrl(attachmentId: string): string {
-  return `/api/attachments/${encodeURIComponent(attachmentId)}/content`;
+export function attachmentUrl(attachmentId: string, download = false): string {
+  return `/api/attachments/${encodeURIComponent(attachmentId)}/content${download ? '?download=1' : ''}`;
 }

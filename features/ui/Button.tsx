@@ -9,13 +9,16 @@ type Props = {
   busy?: boolean;
   disabled?: boolean;
   testID?: string;
+  // When the visible label needs its object to make sense to a screen reader ("Open" what?).
+  accessibilityLabel?: string;
 };
 
-export function Button({ label, onPress, kind = 'primary', busy, disabled, testID }: Props) {
+export function Button({ label, onPress, kind = 'primary', busy, disabled, testID, accessibilityLabel }: Props) {
   const inactive = disabled || busy;
   return (
     <Pressable
       accessibilityRole="button"
+      accessibilityLabel={accessibilityLabel ?? label}
       accessibilityState={{ disabled: !!inactive, busy: !!busy }}
       onPress={inactive ? undefined : onPress}
       testID={testID}

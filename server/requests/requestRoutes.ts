@@ -138,7 +138,9 @@ export function requestRoutes(deps: { db: Database; store: ObjectStore; publicUr
     const { attachment, object } = await openAttachment(deps, actorOf(req), parseId(req.params.id, 'attachment'));
     res.setHeader('content-type', attachment.contentType);
     res.setHeader('content-length', String(attachment.sizeBytes));
-    res.setHeader('content-disposition', `inline; filename*=UTF-8''${encodeURIComponent(attachment.fileName)}`);
+    // ?download=1 saves the file under its own name; otherwise the browser shows it (a PDF, a photo).
+    const disposition = req.query.download === '1' ? 'attachment' : 'inline';
+    res.setHeader('content-disposition', `${disposition}; filename*=UTF-8''${encodeURIComponent(attachment.fileName)}`);
     res.setHeader('x-content-sha256', attachment.sha256);
     object.body.pipe(res);
   });

@@ -62,6 +62,10 @@ describe('attachments', () => {
       expect(back.status).toBe(200);
       expect(sha256(back.body as Buffer)).toBe(sha256(bytes));
       expect(back.headers['content-type']).toBe(type);
+      expect(back.headers['content-disposition']).toBe(`inline; filename*=UTF-8''${encodeURIComponent(name)}`);
+      const saved = await a.section_engineer.get(`/api/attachments/${res.body[0].id}/content?download=1`).buffer(true).parse(binary);
+      expect(saved.headers['content-disposition']).toBe(`attachment; filename*=UTF-8''${encodeURIComponent(name)}`);
+      expect(sha256(saved.body as Buffer)).toBe(sha256(bytes));
     }
   });
 
