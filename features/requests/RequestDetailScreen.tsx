@@ -1,8 +1,8 @@
 // One request: what it asks, its files and conditions, the trail, and what this person may do now.
 // On a wide screen the reading goes on the left and the move and the record on the right.
-import { useLocalSearchParams } from 'expo-router';
+import { Link, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
-import { ActivityIndicator, Linking, Platform, StyleSheet, View } from 'react-native';
+import { ActivityIndicator, Linking, Platform, Pressable, StyleSheet, View } from 'react-native';
 import { stateLabel } from '../../shared/requests/states';
 import type { AttachmentSummary, ConditionView, RequestDetail } from '../../shared/requests/types';
 import { ApiError } from '../api/http';
@@ -53,6 +53,13 @@ function Header({ r }: { r: RequestDetail }) {
       </Text>
       {r.assignedEor ? <Text variant="muted">Engineer of record: {r.assignedEor.name}{r.assignedEor.organization ? `, ${r.assignedEor.organization}` : ''}</Text> : null}
       <Text variant="muted">In this state since {formatWhen(r.deskSince)}</Text>
+      <View style={styles.headerLinks}>
+        <Link href={`/trail/${r.id}`} asChild>
+          <Pressable accessibilityRole="link" style={styles.textLink} testID="request-open-trail">
+            <Text variant="label" style={styles.linkText}>Full trail, chain check and exports</Text>
+          </Pressable>
+        </Link>
+      </View>
     </View>
   );
 }
@@ -212,6 +219,9 @@ const styles = StyleSheet.create({
   side: { flex: 2, gap: space.lg, minWidth: 0 },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.md },
   grow: { flex: 1 },
+  headerLinks: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+  textLink: { minHeight: 44, justifyContent: 'center' },
+  linkText: { color: colors.slate, textDecorationLine: 'underline' },
   fileButtons: { gap: space.xs },
   condition: { gap: 2, borderLeftWidth: 3, borderLeftColor: colors.line, paddingLeft: space.md },
   ok: { color: colors.ok },
