@@ -74,7 +74,7 @@ export function PersonCard({ person, isSelf }: { person: PersonRow; isSelf: bool
       <Text variant="muted">{person.projects.length ? person.projects.map((p) => `${p.code} ${p.name}`).join('; ') : 'On no project yet: add them under Projects.'}</Text>
       {editing ? null : (
         <View style={styles.actions}>
-          <Button kind="secondary" label="Change role" onPress={() => { setSaved(false); setEditing(true); }} testID={`person-edit-${person.email}`} />
+          <Button kind="secondary" label={isSelf ? "Change organization" : "Change role"} onPress={() => { setSaved(false); setEditing(true); }} testID={`person-edit-${person.email}`} />
         </View>
       )}
       {saved ? <Notice tone="ok">Saved. The change applies from their next step in Spanrelay.</Notice> : null}

@@ -98,7 +98,7 @@ describe('people: invitation and password reset in the browser', () => {
     await adminPage.getByTestId('person-role-auditor').click();
     await adminPage.getByTestId('person-save').click();
     await expect.poll(() => adminPage.getByTestId(`person-role-of-${email}`).textContent()).toBe('Auditor · Tallis Section');
-    await invitee.reload();
+    await invitee.goto(`${base}/`);
     await expect.poll(() => invitee.getByTestId('shell-actor').textContent()).toContain('Auditor');
 
     await adminPage.getByTestId('admin-tab-projects').click();
