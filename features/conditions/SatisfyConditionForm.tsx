@@ -93,7 +93,11 @@ export function SatisfyConditionForm({ item, version, onMet, onConflict, onClose
         label="How was it met on site? (required)"
         hint="What you saw or checked, and when. It goes on the request's trail."
         value={note}
-        onChangeText={setNote}
+        onChangeText={(text) => {
+          setNote(text);
+          // A refusal stays only while it is still true.
+          if (errors.note && !noteError(text.trim())) setErrors((e) => ({ ...e, note: undefined }));
+        }}
         multiline
         error={errors.note}
         editable={!busy}

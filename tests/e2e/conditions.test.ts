@@ -129,6 +129,7 @@ describe('conditions on site through the web app', () => {
 
     const note = 'Four anchors proof-loaded to 1.5 kips each at 07:40; none moved. Bracket plumb.';
     await first.getByTestId('condition-note').fill(note);
+    expect(await first.getByText('Note how the condition was met on site.').count()).toBe(0);
     const chooser = page.waitForEvent('filechooser');
     await first.getByTestId('condition-evidence').click();
     await (await chooser).setFiles({ name: 'bracket anchors proof load.jpg', mimeType: 'image/jpeg', buffer: await samplePhoto(320, 240, '#6b7378') });
