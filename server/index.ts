@@ -16,7 +16,7 @@ async function main() {
   await runMigrations(db, pool);
   const mailer = createMailer(env);
   const store = createObjectStore(env);
-  const app = createApp({ env, db, auth: createAuth(db, env), store, mailer });
+  const app = createApp({ env, db, auth: createAuth(db, env, mailer), store, mailer });
   const jobs = await startBackgroundJobs({ pool, db, mailer, store, publicUrl: env.PUBLIC_URL });
 
   const server = app.listen(env.PORT, '127.0.0.1', () => {
