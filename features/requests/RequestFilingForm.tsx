@@ -106,6 +106,7 @@ export function RequestFilingForm(props: Props) {
       const field = fieldFor(path.split('.'));
       if (!field) continue;
       setError(field as FieldPath<FilingFormValues>, { type: 'server', message });
+      setValue(field as FieldPath<FilingFormValues>, getValues(field as FieldPath<FilingFormValues>), { shouldTouch: true });
       placed.push(field);
     }
     const kind = getValues('type');
@@ -115,7 +116,17 @@ export function RequestFilingForm(props: Props) {
       setRefused(true);
       dispatch({ type: 'goTo', step });
     }
-  }, [serverFieldErrors, setError, getValues]);
+  }, [serverFieldErrors, setError, setValue, getValues]);
+
+  // A box named in a refusal is checked again as it is typed in, not only when it loses focus, so
+  // its message is gone before the person presses Next again (a message vanishing on that press
+  // would move the button out from under the pointer).
+  function touchRefused(names: readonly string[]) {
+    for (const name of names) {
+      const field = name as FieldPath<FilingFormValues>;
+      setValue(field, getValues(field), { shouldTouch: true });
+    }
+  }
 
   function goTo(step: FilingStep) {
     setRefused(false);
@@ -136,6 +147,7 @@ export function RequestFilingForm(props: Props) {
     const step = steps.step;
     const names = stepFields(step, getValues('type'));
     let ok = names.length === 0 || (await trigger(names as FieldPath<FilingFormValues>[], { shouldFocus: true }));
+    if (!ok) touchRefused(names);
     if (step === 'files') {
       const lacking = dataSheetLacking();
       setFilesMissing(lacking ? dataSheetMissing : null);
@@ -209,7 +221,6 @@ export function RequestFilingForm(props: Props) {
       ) : null}
 
       {errors.root?.message && steps.step === 'review' ? <FieldError message={errors.root.message} /> : null}
-      {needsAttention ? <FieldError message="Some fields need attention; they are marked in red above." testID="filing-needs-attention" /> : null}
       {status}
       <StepNav
         first={steps.step === 'kind'}
@@ -225,6 +236,7 @@ export function RequestFilingForm(props: Props) {
         onNext={() => void next()}
         onFile={() => void file()}
         onSaveDraft={() => onSaveDraft(getValues(), steps.step)}
+        attention={needsAttention ? <FieldError message="Some fields need attention; they are marked in red above." testID="filing-needs-attention" /> : null}
       />
     </View>
   );

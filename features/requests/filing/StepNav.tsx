@@ -18,10 +18,12 @@ type Props = {
   onNext: () => void;
   onFile: () => void;
   onSaveDraft: () => void;
-  children?: ReactNode;
+  // Why the last press did not move on. Below the buttons: a message above them that vanishes as
+  // a box loses focus would move the button out from under the finger pressing it.
+  attention?: ReactNode;
 };
 
-export function StepNav({ first, last, busy, progress, saving, draftNotice, onBack, onNext, onFile, onSaveDraft }: Props) {
+export function StepNav({ first, last, busy, progress, saving, draftNotice, onBack, onNext, onFile, onSaveDraft, attention }: Props) {
   return (
     <View style={styles.wrap}>
       <View style={styles.row}>
@@ -38,6 +40,7 @@ export function StepNav({ first, last, busy, progress, saving, draftNotice, onBa
           )}
         </View>
       </View>
+      {attention}
       {busy && progress ? <Text variant="muted" style={styles.center} accessibilityLiveRegion="polite">{progress}</Text> : null}
       {last ? <Text variant="muted" style={styles.center}>It goes to the section engineer of the project, who is told by e-mail.</Text> : null}
       <Button kind="secondary" label="Save draft" busy={saving} disabled={busy} onPress={onSaveDraft} testID="filing-save-draft" />

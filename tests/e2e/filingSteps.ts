@@ -1,0 +1,34 @@
+// Moving through the new-request steps in the browser tests.
+import type { Page } from 'playwright-core';
+import { expect } from 'vitest';
+
+export const stepText = (page: Page) => page.getByTestId('filing-step').textContent();
+
+/** Opens the new-request screen from the contractor's desk, at step 1. */
+export async function openNewRequest(page: Page, type?: string) {
+  await page.getByTestId('desk-new-request').click();
+  await page.waitForURL(/\/requests\/new/);
+  await expect.poll(() => stepText(page)).toBe('Step 1 of 5: Kind of request');
+  if (type) await page.getByTestId(`filing-type-${type}`).click();
+}
+
+/** Presses Next and waits for the step named (e.g. "Step 3 of 5: The departure"). */
+export async function nextStep(page: Page, expected: string) {
+  await page.getByTestId('filing-next').click();
+  await expect.poll(() => stepText(page), { timeout: 10_000 }).toBe(expected);
+}
+
+export async function attachFile(page: Page, file: { name: string; mimeType: string; buffer: Buffer }) {
+  const before = await page.getByTestId('filing-file').count();
+  const chooser = page.waitForEvent('filechooser');
+  await page.getByTestId('filing-add-files').click();
+  await (await chooser).setFiles(file);
+  await expect.poll(() => page.getByTestId('filing-file').count()).toBe(before + 1);
+}
+
+export const steps = {
+  where: 'Step 2 of 5: What and where',
+  departure: 'Step 3 of 5: The departure',
+  files: 'Step 4 of 5: Drawings and photos',
+  review: 'Step 5 of 5: Review and file',
+};
