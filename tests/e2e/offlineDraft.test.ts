@@ -92,4 +92,43 @@ describe('a draft saved without a connection', () => {
     await expect.poll(() => again.getByTestId('filing-reason').inputValue()).toBe(reason);
     await context.close();
   });
+
+  // Two tabs on one draft: the second save finds the draft moved on, says so, and shows the
+  // version on Spanrelay instead of overwriting it.
+  it('a save that finds the draft changed elsewhere reloads it instead of overwriting', async () => {
+    const context = await browser.newContext({ viewport: phone });
+    const page = await context.newPage();
+    const title = `Drain outlet at pier 2, saved twice ${Date.now().toString(36)}`;
+    await signInAs(page, 'contractor');
+    await openNewRequest(page);
+    await nextStep(page, steps.where);
+    await fillFields(page, { 'filing-title': title, 'filing-location': 'Deck drain DR-4 over pier 2, north fascia' });
+    await page.getByTestId('filing-save-draft').click();
+    await expect.poll(() => page.getByTestId('draft-notice').textContent(), { timeout: 10_000 }).toMatch(/^Draft saved to Spanrelay as PC-0114-\d{3}\.$/);
+    const number = /PC-0114-\d{3}/.exec((await page.getByTestId('draft-notice').textContent()) ?? '')![0];
+
+    // Another tab saves the same draft first, from inside the app's origin.
+    const list = (await (await context.request.get(`${base}/api/requests?state=drafting&sort=newest&limit=100`)).json()) as RequestPage;
+    const saved = list.items.find((r) => r.number === number)!;
+    const theirs = `${title} (their version)`;
+    const status = await page.evaluate<number>(`fetch('/api/requests/${saved.id}/draft', {
+      method: 'PUT', credentials: 'include', headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ version: ${saved.version}, body: { type: 'other_deviation', projectId: '${saved.project.id}', title: ${JSON.stringify(theirs)} } }),
+    }).then((r) => r.status)`);
+    expect(status).toBe(200);
+
+    await page.getByTestId('filing-title').fill(`${title} (mine)`);
+    await page.getByTestId('filing-save-draft').click();
+    await expect.poll(() => page.getByTestId('draft-notice').textContent(), { timeout: 10_000 }).toContain('Someone changed this draft on Spanrelay since you opened it');
+    expect(await page.getByTestId('filing-title').inputValue()).toBe(theirs);
+    await screenshotWhole(page, phone, join(shots, 'offline-4-changed-elsewhere.png'));
+
+    // Saving again now goes on from their version.
+    await page.getByTestId('filing-title').fill(`${theirs}, checked`);
+    await page.getByTestId('filing-save-draft').click();
+    await expect.poll(() => page.getByTestId('draft-notice').textContent(), { timeout: 10_000 }).toBe(`Draft saved to Spanrelay as ${number}.`);
+    const detail = (await (await context.request.get(`${base}/api/requests/${saved.id}`)).json()) as { title: string; version: number };
+    expect(detail).toMatchObject({ title: `${theirs}, checked`, version: saved.version + 2 });
+    await context.close();
+  });
 });

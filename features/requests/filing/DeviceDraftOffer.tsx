@@ -29,7 +29,7 @@ export function DeviceDraftOffer({ drafts, onCarryOn, onDiscard }: { drafts: Kep
             <Text variant="muted">{requestTypeLabels[d.values.type] ?? ''} · changed {formatWhen(d.updatedAt)}</Text>
             <Text variant="muted">{state(d)}</Text>
             <View style={styles.row}>
-              <Button label={`Continue “${title}”`} onPress={() => onCarryOn(d)} testID="device-draft-continue" />
+              <Button label="Continue this draft" onPress={() => onCarryOn(d)} testID="device-draft-continue" />
               <Button
                 kind="quiet"
                 label={d.server ? 'Remove from this device' : 'Throw this draft away'}

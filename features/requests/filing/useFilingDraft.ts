@@ -54,6 +54,7 @@ export function useFilingDraft() {
   const [seed, setSeed] = useState<FormSeed>({ key: 0, values: null, step: 'kind', pickAgain: [] });
   const [kept, setKept] = useState<KeptDraft[]>([]);
   const pendingKeep = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const round = useRef<Promise<void> | null>(null);
   const latest = useRef<{ values: FilingFormValues; step: FilingStep } | null>(null);
   const current = useRef({ localId, server });
   current.current = { localId, server };
@@ -173,6 +174,8 @@ export function useFilingDraft() {
       if (!browserOnline()) return queueHere();
       setSaving(true);
       try {
+        // A queued copy on its way now would otherwise be created a second time by this save.
+        if (round.current) await round.current;
         const ref = await send(body, current.current.server);
         setServer(ref);
         current.current = { ...current.current, server: ref };
@@ -192,6 +195,17 @@ export function useFilingDraft() {
   /** Sends what waits on the device; the open draft's notice changes once it is through. */
   const sendWaiting = useCallback(async () => {
     if (!userId || !browserOnline()) return;
+    // One round at a time: the screen opening and the connection returning can come together,
+    // and two rounds would each create the same draft.
+    if (round.current) return round.current;
+    round.current = sendRound().finally(() => {
+      round.current = null;
+    });
+    return round.current;
+  }, [userId]);
+
+  const sendRound = async () => {
+    if (!userId) return;
     const outcomes = await sendQueued<FilingFormValues>(
       store,
       userId,
@@ -211,7 +225,7 @@ export function useFilingDraft() {
       } else if ('refused' in o) setNotice({ tone: 'error', text: `The draft kept on this device was not saved to Spanrelay: ${o.refused}` });
     }
     refreshKept();
-  }, [refreshKept, send, store, userId]);
+  };
 
   const online = useOnline(useCallback(() => void sendWaiting(), [sendWaiting]));
 
