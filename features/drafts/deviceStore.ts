@@ -1,16 +1,7 @@
 // The device's store for kept drafts: localStorage on the web. Where there is none (private
 // modes that refuse it, or native) a map stands in, so the form still works for this visit.
 import type { KeyValueStore } from './deviceDrafts';
-
-export function memoryStore(): KeyValueStore {
-  const map = new Map<string, string>();
-  return {
-    getItem: (k) => map.get(k) ?? null,
-    setItem: (k, v) => void map.set(k, v),
-    removeItem: (k) => void map.delete(k),
-    keys: () => [...map.keys()],
-  };
-}
+import { memoryStore } from './memoryStore';
 
 function browserStore(): KeyValueStore | null {
   try {

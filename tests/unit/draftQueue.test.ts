@@ -1,7 +1,7 @@
 // Drafts kept on the device and the queue that sends them when the connection returns.
 import { describe, expect, it } from 'vitest';
 import { draftKey, keepDraft, listDrafts, patchDraft, queuedDrafts, readDraft, sendQueued, type DeviceDraft, type ServerDraftRef } from '../../features/drafts/deviceDrafts';
-import { memoryStore } from '../../features/drafts/deviceStore';
+import { memoryStore } from '../../features/drafts/memoryStore';
 
 type Values = { title: string };
 
