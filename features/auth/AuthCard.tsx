@@ -1,13 +1,15 @@
 // The card every signed-out screen sits in (sign-in, forgotten password, reset, invitation), and
 // the links between them.
-import type { ReactNode } from 'react';
+import { useEffect, type ReactNode } from 'react';
 import { Link, type Href } from 'expo-router';
 import { Pressable, StyleSheet, View } from 'react-native';
+import { installFocusRing } from '../ui/focusRing';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { colors, fonts, radius, space } from '../ui/theme';
 
 export function AuthCard({ title, intro, children }: { title: string; intro?: string; children: ReactNode }) {
+  useEffect(installFocusRing, []);
   return (
     <Screen>
       <View style={styles.card}>

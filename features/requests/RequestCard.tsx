@@ -16,7 +16,9 @@ export function RequestCard({ request: r, selected = false, onSelect }: Props) {
     <Pressable
       // Flattened: a Link passing its child a style array fails on the web.
       style={StyleSheet.flatten([styles.card, r.overdue && styles.overdue, selected && styles.selected])}
-      accessibilityRole="link"
+      // Beside the list it shows the request in the pane, which is a button's job; a link without
+      // an address would ignore Enter on the web.
+      accessibilityRole={onSelect ? 'button' : 'link'}
       accessibilityState={{ selected }}
       accessibilityLabel={`${r.number}, ${r.title}, ${stateLabel(r.state)}${r.overdue ? ', overdue' : ''}`}
       onPress={onSelect ? () => onSelect(r.id) : undefined}

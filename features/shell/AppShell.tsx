@@ -1,6 +1,6 @@
 // The signed-in frame. On a phone: a slim top bar and tabs along the bottom, in thumb reach. From
 // 768 px: a side navigation with the same destinations. One component, one breakpoint hook.
-import type { ReactNode } from 'react';
+import { useEffect, type ReactNode } from 'react';
 import { Link, usePathname, useRouter } from 'expo-router';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { roleLabels } from '../../shared/roles';
@@ -8,6 +8,7 @@ import type { Actor } from '../../shared/requests/types';
 import { useSignOut } from '../auth/useActor';
 import { useRequestCounts } from '../requests/api';
 import { useBreakpoint } from '../ui/breakpoints';
+import { installFocusRing } from '../ui/focusRing';
 import { Icon } from '../ui/icons';
 import { Text } from '../ui/Text';
 import { colors, fonts, radius, space } from '../ui/theme';
@@ -68,6 +69,7 @@ function SignOutButton({ tone }: { tone: 'bar' | 'side' }) {
 
 export function AppShell({ actor, children }: { actor: Actor; children: ReactNode }) {
   const { isPhone } = useBreakpoint();
+  useEffect(installFocusRing, []);
   const pathname = usePathname();
   const items = destinationsFor(actor.role);
   const active = activeDestination(pathname, actor.role);
@@ -77,7 +79,7 @@ export function AppShell({ actor, children }: { actor: Actor; children: ReactNod
   if (isPhone) {
     return (
       <View style={styles.frame}>
-        <View style={styles.bar}>
+        <View style={styles.bar} testID="shell-bar">
           <Text style={styles.brand} accessibilityRole="header">Spanrelay</Text>
           <Text style={styles.whoText} numberOfLines={1} testID="shell-actor">{who}</Text>
           <SignOutButton tone="bar" />

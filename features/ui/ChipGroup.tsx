@@ -1,6 +1,7 @@
 // A row of pills for picking one value of a filter, "Any" first. Pills wrap on a phone and each is
 // at least 44 px tall.
 import { Pressable, StyleSheet, View } from 'react-native';
+import { spaceAlsoPresses } from './keyboard';
 import { Text } from './Text';
 import { colors, fonts, space } from './theme';
 
@@ -32,6 +33,7 @@ export function ChipGroup<T extends string>({ label, options, value, onChange, a
               accessibilityState={{ checked: chosen }}
               accessibilityLabel={`${label}: ${o.label}`}
               onPress={() => onChange(o.value)}
+              {...spaceAlsoPresses(() => onChange(o.value))}
               style={[styles.chip, chosen && styles.chosen]}
               testID={testID ? `${testID}-${o.value ?? 'any'}` : undefined}
             >

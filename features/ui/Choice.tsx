@@ -2,6 +2,7 @@
 // visible frame, large enough to hit with a gloved thumb on site.
 import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
+import { spaceAlsoPresses } from './keyboard';
 import { Text } from './Text';
 import { colors, radius, space } from './theme';
 
@@ -22,6 +23,7 @@ export function Choice({ label, detail, chosen, onPress, testID, compact, childr
       accessibilityState={{ checked: chosen }}
       accessibilityLabel={detail ? `${label}. ${detail}` : label}
       onPress={onPress}
+      {...spaceAlsoPresses(onPress)}
       testID={testID}
       style={[styles.choice, compact && styles.compact, chosen && styles.chosen]}
     >

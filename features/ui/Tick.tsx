@@ -1,6 +1,7 @@
 // A yes/no box for facts that are either so or not (joint roughened, waterstop fitted), with the
 // same thumb-sized frame as a Choice.
 import { Pressable, StyleSheet, View } from 'react-native';
+import { spaceAlsoPresses } from './keyboard';
 import { Text } from './Text';
 import { colors, radius, space } from './theme';
 
@@ -11,6 +12,7 @@ export function Tick({ label, checked, onChange, testID }: { label: string; chec
       accessibilityState={{ checked }}
       accessibilityLabel={label}
       onPress={() => onChange(!checked)}
+      {...spaceAlsoPresses(() => onChange(!checked))}
       testID={testID}
       style={[styles.box, checked && styles.on]}
     >

@@ -48,3 +48,15 @@ export const textOnBackground: readonly { where: string; text: string; backgroun
   { where: 'met condition', text: colors.ok, background: colors.surface },
   { where: 'open condition', text: colors.caution, background: colors.surface },
 ];
+
+// The keyboard focus ring (features/ui/focusRing.ts) against each background a focusable control
+// sits on; WCAG 2.2 1.4.11 (Non-text Contrast, level AA) asks 3:1.
+export const focusRingOnBackground: readonly { where: string; ring: string; background: string }[] = [
+  { where: 'on the page', ring: colors.slate, background: colors.concrete },
+  { where: 'on a card, panel or the bottom tabs', ring: colors.slate, background: colors.surface },
+  { where: 'in a chosen option or an information notice', ring: colors.slate, background: colors.slateLight },
+  { where: 'in an error notice', ring: colors.slate, background: colors.dangerBg },
+  { where: 'in a caution notice', ring: colors.slate, background: colors.cautionBg },
+  { where: 'in a confirmation notice', ring: colors.slate, background: colors.okBg },
+  { where: 'in the side navigation and the top bar', ring: colors.slateLight, background: colors.slate },
+];

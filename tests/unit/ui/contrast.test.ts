@@ -1,7 +1,7 @@
 // The theme's text colours against their backgrounds, by the WCAG 2.2 contrast ratio.
 import { describe, expect, it } from 'vitest';
 import { contrastRatio, relativeLuminance } from '../../../features/ui/contrast';
-import { textOnBackground } from '../../../features/ui/theme';
+import { focusRingOnBackground, textOnBackground } from '../../../features/ui/theme';
 
 describe('WCAG contrast ratio', () => {
   it('matches the definition at its end points', () => {
@@ -23,5 +23,10 @@ describe('the theme', () => {
   // WCAG 2.2 success criterion 1.4.3 (Contrast, Minimum, level AA): 4.5:1 for normal-size text.
   it.each(textOnBackground)('$where meets 4.5:1', ({ text, background }) => {
     expect(contrastRatio(text, background)).toBeGreaterThanOrEqual(4.5);
+  });
+
+  // WCAG 2.2 success criterion 1.4.11 (Non-text Contrast, level AA): 3:1 for a focus indicator.
+  it.each(focusRingOnBackground)('the focus ring $where meets 3:1', ({ ring, background }) => {
+    expect(contrastRatio(ring, background)).toBeGreaterThanOrEqual(3);
   });
 });
