@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RequestPage } from '../../shared/requests/types';
 import { launchChromium } from '../support/browser';
 import { artifactsDir } from '../support/testSettings';
-import { nextStep, openNewRequest, stepText, steps } from './filingSteps';
+import { fillDeckPlacement, fillRetarder, nextStep, openNewRequest, stepText, steps } from './filingSteps';
 import { base, fillFields, screenshotWhole, signInAs } from './helpers';
 
 const shots = join(artifactsDir(), 'screenshots');
@@ -18,29 +18,6 @@ const caution = 'engineer of record';
 
 async function fillWhere(page: Page, title: string, where: string) {
   await fillFields(page, { 'filing-title': title, 'filing-location': where });
-}
-
-async function fillDeckPlacement(page: Page) {
-  await fillFields(page, {
-    'filing-spans': '95, 120, 95',
-    'filing-deck-width': '46',
-    'filing-slab-thickness': '8.5',
-    'filing-haunch': '0.12',
-    'filing-planned-sequence': 'Five stages: positive-moment lengths first, then the pier lengths (sheet S-6).',
-  });
-  await page.getByTestId('filing-sequence-single_placement').click();
-  await fillFields(page, {
-    'filing-proposed-sequence': 'One placement from abutment 1 toward abutment 2.',
-    'filing-placement-rate': '55',
-    'filing-equipment': 'Two boom pumps, one finishing machine',
-  });
-}
-
-async function fillRetarder(page: Page) {
-  await page.getByTestId('filing-retarder').click();
-  await page.getByTestId('filing-retarder-type-D').click();
-  await page.getByTestId('filing-retarder-product').fill('Type D retarder, trial batch TB-7');
-  await page.getByTestId('filing-initial-set').fill('11.5');
 }
 
 async function fillCommonRest(page: Page) {

@@ -9,7 +9,7 @@ import { demoEmail } from '../../server/demo/demoScenario';
 import { launchChromium } from '../support/browser';
 import { artifactsDir } from '../support/testSettings';
 import { attachFile, nextStep, openNewRequest, stepText, steps } from './filingSteps';
-import { base, fillFields, screenshotWhole, signInAs } from './helpers';
+import { base, fillFields, mailFor, screenshotWhole, signInAs } from './helpers';
 
 const shots = join(artifactsDir(), 'screenshots');
 
@@ -17,19 +17,6 @@ const viewports = [
   { name: 'phone', width: 390, height: 844 },
   { name: 'wide', width: 1440, height: 900 },
 ];
-
-type CaughtMail = { to: string; subject: string; text: string; sentAt: string };
-
-async function mailFor(to: string, subjectPart: string): Promise<CaughtMail | undefined> {
-  const deadline = Date.now() + 15_000;
-  while (Date.now() < deadline) {
-    const all = (await (await fetch(`${base}/api/dev/mail`)).json()) as CaughtMail[];
-    const hit = all.find((m) => m.to.includes(to) && m.subject.includes(subjectPart));
-    if (hit) return hit;
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  return undefined;
-}
 
 async function fillWhere(page: Page, title: string) {
   await fillFields(page, {

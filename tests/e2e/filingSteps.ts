@@ -1,6 +1,7 @@
 // Moving through the new-request steps in the browser tests.
 import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
+import { fillFields } from './helpers';
 
 export const stepText = (page: Page) => page.getByTestId('filing-step').textContent();
 
@@ -32,3 +33,27 @@ export const steps = {
   files: 'Step 4 of 5: Drawings and photos',
   review: 'Step 5 of 5: Review and file',
 };
+
+// The demo's three-span deck, placed in one pour, as the engineering tests and the journey file it.
+export async function fillDeckPlacement(page: Page) {
+  await fillFields(page, {
+    'filing-spans': '95, 120, 95',
+    'filing-deck-width': '46',
+    'filing-slab-thickness': '8.5',
+    'filing-haunch': '0.12',
+    'filing-planned-sequence': 'Five stages: positive-moment lengths first, then the pier lengths (sheet S-6).',
+  });
+  await page.getByTestId('filing-sequence-single_placement').click();
+  await fillFields(page, {
+    'filing-proposed-sequence': 'One placement from abutment 1 toward abutment 2.',
+    'filing-placement-rate': '55',
+    'filing-equipment': 'Two boom pumps, one finishing machine',
+  });
+}
+
+export async function fillRetarder(page: Page) {
+  await page.getByTestId('filing-retarder').click();
+  await page.getByTestId('filing-retarder-type-D').click();
+  await page.getByTestId('filing-retarder-product').fill('Type D retarder, trial batch TB-7');
+  await page.getByTestId('filing-initial-set').fill('11.5');
+}

@@ -36,3 +36,18 @@ export async function screenshotWhole(page: Page, vp: { width: number; height: n
 export async function fillFields(page: Page, values: Record<string, string>) {
   for (const [testId, value] of Object.entries(values)) await page.getByTestId(testId).fill(value);
 }
+
+type CaughtMail = { to: string; subject: string; text: string; sentAt: string };
+
+// The caught mail (development route) to `to` whose subject holds `subjectPart`, waiting for the
+// job worker to deliver it.
+export async function mailFor(to: string, subjectPart: string): Promise<CaughtMail | undefined> {
+  const deadline = Date.now() + 15_000;
+  while (Date.now() < deadline) {
+    const all = (await (await fetch(`${base}/api/dev/mail`)).json()) as CaughtMail[];
+    const hit = all.find((m) => m.to.includes(to) && m.subject.includes(subjectPart));
+    if (hit) return hit;
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  return undefined;
+}
