@@ -8,6 +8,7 @@ import { TypedFields } from './TypedFields';
 import { Panel } from '../ui/Panel';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
+import { changedFieldName, changedValue } from './changeWords';
 import { formatCostImpact, formatDay, formatDays } from './format';
 
 const notYet = 'Not given yet';
@@ -19,26 +20,6 @@ function Field({ label, value, testID }: { label: string; value: string | undefi
       <Text style={value ? undefined : styles.missing}>{value || notYet}</Text>
     </View>
   );
-}
-
-const fieldNames: Record<string, string> = {
-  title: 'Title',
-  'location.description': 'Where on the structure',
-  'location.span': 'Span',
-  'location.station': 'Station',
-  planSheets: 'Plan sheets',
-  reason: 'Reason',
-  proposedChange: 'Proposed change',
-  neededBy: 'Decision needed by',
-  'costImpact.kind': 'Cost impact',
-  'costImpact.amountUsd': 'Cost amount',
-  contractTimeImpactDays: 'Contract-time impact',
-};
-
-function shown(value: unknown): string {
-  if (value === null || value === undefined || value === '') return '(empty)';
-  if (Array.isArray(value)) return value.length ? value.join(', ') : '(none)';
-  return String(value);
 }
 
 export function RequestBodyView({ revision }: { revision: RevisionView }) {
@@ -70,7 +51,7 @@ export function RequestBodyView({ revision }: { revision: RevisionView }) {
           <Text variant="label">Changed since revision {revision.revision - 1}</Text>
           {changes.map((c) => (
             <Text key={c.path} variant="muted">
-              {fieldNames[c.path] ?? c.path}: {shown(c.before)} → {shown(c.after)}
+              {changedFieldName(c.path)}: {changedValue(c.before)} → {changedValue(c.after)}
             </Text>
           ))}
         </View>
