@@ -64,8 +64,9 @@ describe.each(viewports)('a deck placement request across every desk ($name)', (
     else expect(page.url()).toMatch(/\/requests\/[0-9a-f-]{36}$/);
   }
 
-  async function move(action: string, comment: string | null, expectedState: string) {
-    await page.getByTestId(`action-${action}`).click();
+  // A chosen move is pressed again to unchoose it, so it is pressed only when not chosen yet.
+  async function move(action: string, comment: string | null, expectedState: string, alreadyChosen = false) {
+    if (!alreadyChosen) await page.getByTestId(`action-${action}`).click();
     if (comment) await page.getByTestId('action-comment').fill(comment);
     await shot(`${action}-chosen`);
     await page.getByTestId('action-send').click();
@@ -129,7 +130,7 @@ describe.each(viewports)('a deck placement request across every desk ($name)', (
     await page.getByTestId('action-return_for_revision').click();
     await page.getByTestId('action-send').click();
     await expect.poll(() => page.getByTestId('action-panel').textContent()).toContain('Say why it goes back for revision');
-    await move('return_for_revision', 'Show the pump positions at both piers and the washout area; the photo covers pier 1 only.', 'Returned for revision');
+    await move('return_for_revision', 'Show the pump positions at both piers and the washout area; the photo covers pier 1 only.', 'Returned for revision', true);
     await expectMailed('contractor', number);
     expect(errors).toEqual([]);
   });
@@ -172,7 +173,7 @@ describe.each(viewports)('a deck placement request across every desk ($name)', (
     await openFromDesk();
     await page.getByTestId('action-route').click();
     await page.getByTestId('action-eor').filter({ hasText: 'Ruth Caldera' }).click();
-    await move('route', null, 'With the engineer of record');
+    await move('route', null, 'With the engineer of record', true);
     await expectMailed('engineer_of_record', number);
     expect(errors).toEqual([]);
   });
@@ -189,7 +190,7 @@ describe.each(viewports)('a deck placement request across every desk ($name)', (
       await rows.nth(i).getByTestId('action-condition-text').fill(c.text);
       await rows.nth(i).getByTestId('action-condition-due').fill(c.dueBefore);
     }
-    await move('approve_with_conditions', 'Approved for one placement provided both conditions are met.', 'Approved with conditions; conditions open');
+    await move('approve_with_conditions', 'Approved for one placement provided both conditions are met.', 'Approved with conditions; conditions open', true);
     const listed = await page.getByTestId('request-conditions').textContent();
     for (const c of conditions) expect(listed).toContain(c.text);
     await shot('approved-with-conditions');
