@@ -17,9 +17,8 @@ import { colors, radius, space } from '../ui/theme';
 import { useAddComment, useEngineersOfRecord, useWorkflowEvent } from './api';
 
 // Moves whose forms need more than a comment (evidence, letters, a classification) come later.
+// Submit and resubmit are made from the filing form, where the body is changed before it goes.
 const panelMoves = [
-  'submit',
-  'resubmit',
   'provide_information',
   'forward',
   'route',
@@ -33,11 +32,9 @@ const panelMoves = [
 ] as const satisfies readonly WorkflowEventType[];
 type PanelMove = (typeof panelMoves)[number];
 
-const commentRequired: ReadonlySet<PanelMove> = new Set(['return_for_revision', 'reject', 'request_information', 'provide_information', 'resubmit', 'reassign']);
+const commentRequired: ReadonlySet<PanelMove> = new Set(['return_for_revision', 'reject', 'request_information', 'provide_information', 'reassign']);
 
 const whatFollows: Record<PanelMove, string> = {
-  submit: 'It goes to the section engineer, who is told by e-mail. You cannot edit it while it is being reviewed.',
-  resubmit: 'The revised request goes back to the section engineer. Say what you changed.',
   provide_information: 'Your answer goes back to the engineer of record. Attachments for answers come with a later version; describe them here for now.',
   forward: 'It goes to central office to be routed to an engineer of record.',
   route: 'The engineer of record you choose reviews it and decides.',

@@ -18,6 +18,7 @@ import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
 import { ActionPanel } from './ActionPanel';
 import { attachmentUrl, useRequestDetail } from './api';
+import { ReviseEntry } from './filing/ReviseEntry';
 import { formatBytes, formatWhen, requestTypeLabel } from './format';
 import { RequestBodyView } from './RequestBodyView';
 import { TrailTimeline } from './TrailTimeline';
@@ -179,6 +180,7 @@ export function RequestDetailView({ id, inPane = false, filed = false }: { id: s
       {filed && r.state === 'section_review' ? (
         <Notice tone="ok" testID="request-filed">The request is filed. It is with the section engineer, who has been told by e-mail; you are told by e-mail when it comes back to you or is decided.</Notice>
       ) : null}
+      <ReviseEntry request={r} actorId={actor?.id} />
       {request.isRefetching ? <Text variant="muted" accessibilityLiveRegion="polite">Checking for changes…</Text> : null}
       {twoColumns ? (
         <View style={styles.columns}>

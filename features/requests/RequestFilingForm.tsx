@@ -6,18 +6,20 @@ import { useEffect, useReducer, useRef, useState, type ReactNode } from 'react';
 import { get, useForm, useWatch, type FieldErrors, type FieldPath } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { StyleSheet, View } from 'react-native';
-import type { RequestBody, RequestType } from '../../shared/requests/requestBody';
-import type { ProjectSummary } from '../../shared/requests/types';
+import type { RequestBody, RequestDraft, RequestType } from '../../shared/requests/requestBody';
+import type { AttachmentSummary, ProjectSummary } from '../../shared/requests/types';
 import { FieldError } from '../ui/Choice';
 import { space } from '../ui/theme';
 import type { PickedFile } from './api';
 import { ScheduleAndCost, TheChange, WhatAndWhere } from './filing/CommonFields';
 import { ConstructionJointFields } from './filing/ConstructionJointFields';
 import { DeckPlacementFields } from './filing/DeckPlacementFields';
+import { resubmitCommentProblem } from './filing/editRequest';
 import { FilesSection } from './filing/FilesSection';
 import { fieldFor, filingSchema } from './filing/formSchema';
 import type { FilingFormValues } from './filing/formValues';
 import { LiveEngineeringCheck } from './filing/LiveEngineeringCheck';
+import { ResubmitReview } from './filing/ResubmitReview';
 import { ReviewStep } from './filing/ReviewStep';
 import { SealSubstitutionFields } from './filing/SealSubstitutionFields';
 import { StepIndicator } from './filing/StepIndicator';
@@ -47,7 +49,13 @@ type Props = {
   draftNotice: DraftNotice | null;
   onKeep: (values: FilingFormValues, step: FilingStep) => void;
   onSaveDraft: (values: FilingFormValues, step: FilingStep) => void;
-  onSubmit: (body: RequestBody) => void;
+  // The comment is given only when resubmitting.
+  onSubmit: (body: RequestBody, comment?: string) => void;
+  // A request already on Spanrelay: the files filed with the revision being prepared.
+  storedFiles?: readonly AttachmentSummary[];
+  // A returned request being prepared as `revision`; `before` is the body of the one returned.
+  resubmit?: { revision: number; before: RequestDraft | undefined };
+  fileLabel?: string;
 };
 
 const dataSheetMissing = 'Attach the substitute seal’s data sheet: a seal substitution cannot be filed without it.';
@@ -66,7 +74,7 @@ function errorPaths(errors: FieldErrors, prefix = ''): string[] {
 
 export function RequestFilingForm(props: Props) {
   const { projects, initialValues, initialStep, busy, progress, projectLocked, files, onFilesChange, savedFiles, offline, pickAgain } = props;
-  const { serverFieldErrors, status, saving, draftNotice, onKeep, onSaveDraft, onSubmit } = props;
+  const { serverFieldErrors, status, saving, draftNotice, onKeep, onSaveDraft, onSubmit, storedFiles = [], resubmit, fileLabel } = props;
   const { control, handleSubmit, formState, setError, setValue, clearErrors, trigger, getValues, watch, setFocus } = useForm<FilingFormValues, unknown, RequestBody>({
     resolver: zodResolver(filingSchema),
     mode: 'onTouched',
@@ -75,6 +83,8 @@ export function RequestFilingForm(props: Props) {
   const [steps, dispatch] = useReducer(stepReducer, initialStep, (step) => (step === 'kind' ? firstStep : { step, reached: step }));
   const [refused, setRefused] = useState(false);
   const [filesMissing, setFilesMissing] = useState<string | null>(null);
+  const [comment, setComment] = useState('');
+  const [commentError, setCommentError] = useState<string | undefined>(undefined);
   const focusAfterMove = useRef<string | null>(null);
   const top = useRef<View>(null);
   const stepNow = useRef(steps.step);
@@ -141,7 +151,13 @@ export function RequestFilingForm(props: Props) {
   }
 
   // Said at every press, not only once the rest is right, so the missing sheet is not a surprise at the end.
-  const dataSheetLacking = () => getValues('type') === 'joint_seal_substitution' && files.length === 0;
+  const dataSheetLacking = () => getValues('type') === 'joint_seal_substitution' && files.length + storedFiles.length === 0;
+
+  function changeComment(text: string) {
+    setComment(text);
+    // Once refused, the message follows the typing so it is gone before the next press.
+    if (commentError) setCommentError(resubmitCommentProblem(text) ?? undefined);
+  }
 
   async function next() {
     const step = steps.step;
@@ -166,8 +182,16 @@ export function RequestFilingForm(props: Props) {
         return;
       }
       setFilesMissing(null);
+      if (resubmit) {
+        const problem = resubmitCommentProblem(comment);
+        setCommentError(problem ?? undefined);
+        if (problem) {
+          setRefused(true);
+          return;
+        }
+      }
       setRefused(false);
-      onSubmit(body);
+      onSubmit(body, resubmit ? comment.trim() : undefined);
     },
     (found) => {
       setRefused(true);
@@ -184,7 +208,7 @@ export function RequestFilingForm(props: Props) {
 
   const shown = stepFields(steps.step, type);
   const stepHasErrors = shown.some((name) => get(errors, name)) || (steps.step === 'review' && Object.keys(errors).length > 0);
-  const needsAttention = refused && (stepHasErrors || (filesMissing !== null && files.length === 0));
+  const needsAttention = refused && (stepHasErrors || (filesMissing !== null && files.length + storedFiles.length === 0) || (steps.step === 'review' && commentError !== undefined));
 
   return (
     <View style={styles.form}>
@@ -211,12 +235,25 @@ export function RequestFilingForm(props: Props) {
           missing={filesMissing}
           offline={offline}
           pickAgain={pickAgain}
+          stored={storedFiles}
+          revision={resubmit?.revision}
         />
       ) : null}
       {steps.step === 'review' ? (
         <>
-          <ReviewStep control={control} projects={projects} files={files} onChange={goTo} />
+          <ReviewStep control={control} projects={projects} files={files} stored={storedFiles} onChange={goTo} />
           <LiveEngineeringCheck control={control} />
+          {resubmit ? (
+            <ResubmitReview
+              control={control}
+              revision={resubmit.revision}
+              before={resubmit.before}
+              newFiles={files.filter((f) => !savedFiles.has(f)).length}
+              comment={comment}
+              onComment={changeComment}
+              error={commentError}
+            />
+          ) : null}
         </>
       ) : null}
 
@@ -236,6 +273,7 @@ export function RequestFilingForm(props: Props) {
         onNext={() => void next()}
         onFile={() => void file()}
         onSaveDraft={() => onSaveDraft(getValues(), steps.step)}
+        fileLabel={fileLabel}
         attention={needsAttention ? <FieldError message="Some fields need attention; they are marked in red above." testID="filing-needs-attention" /> : null}
       />
     </View>

@@ -3,6 +3,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { uploadLimits } from '../../../shared/requests/filing';
+import type { AttachmentSummary } from '../../../shared/requests/types';
 import { Button } from '../../ui/Button';
 import { FieldError } from '../../ui/Choice';
 import { Notice } from '../../ui/Notice';
@@ -23,25 +24,29 @@ type Props = {
   offline?: boolean;
   // Names of files picked before the page was closed: the files themselves are not kept on the device.
   pickAgain?: readonly string[];
+  // A request already on Spanrelay: the files filed with the revision being prepared, and its number.
+  stored?: readonly AttachmentSummary[];
+  revision?: number;
 };
 
 const offlineWords =
   'You are offline, so files cannot be uploaded now. The files you add stay listed here and are uploaded when you file the request with the connection back. If this page is closed or reloaded before then, you will need to pick them again.';
 
-export function FilesSection({ files, onChange, savedFiles, needsDataSheet, missing, offline, pickAgain = [] }: Props) {
+export function FilesSection({ files, onChange, savedFiles, needsDataSheet, missing, offline, pickAgain = [], stored = [], revision }: Props) {
   const [fileError, setFileError] = useState<string | null>(null);
-  const stillToPick = pickAgain.filter((name) => !files.some((f) => f.name === name));
+  const stillToPick = pickAgain.filter((name) => !files.some((f) => f.name === name) && !stored.some((a) => a.fileName === name));
+  const room = uploadLimits.maxFilesPerRequest - stored.length;
 
   async function addFiles() {
     const picked = await pickFiles();
     const tooBig = picked.filter((f) => f.size > uploadLimits.maxFileBytes);
     const empty = picked.filter((f) => f.size === 0);
     const accepted = picked.filter((f) => f.size > 0 && f.size <= uploadLimits.maxFileBytes);
-    onChange([...files, ...accepted].slice(0, uploadLimits.maxFilesPerRequest));
+    onChange([...files, ...accepted].slice(0, Math.max(room, 0)));
     const problems = [
       ...tooBig.map((f) => `"${f.name}" is over the ${formatBytes(uploadLimits.maxFileBytes)} limit.`),
       ...empty.map((f) => `"${f.name}" is empty.`),
-      files.length + accepted.length > uploadLimits.maxFilesPerRequest ? `At most ${uploadLimits.maxFilesPerRequest} files per request.` : '',
+      files.length + accepted.length > room ? `At most ${uploadLimits.maxFilesPerRequest} files per request.` : '',
     ].filter(Boolean);
     setFileError(problems.length ? problems.join(' ') : null);
   }
@@ -59,6 +64,16 @@ export function FilesSection({ files, onChange, savedFiles, needsDataSheet, miss
           {`Before the page was closed you had picked ${stillToPick.map((n) => `“${n}”`).join(', ')}. Files are not kept on this device; add ${stillToPick.length === 1 ? 'it' : 'them'} again.`}
         </Notice>
       ) : null}
+      {revision !== undefined && revision > 1 ? (
+        <Text variant="muted">{`Files filed with earlier revisions stay with them. Add what revision ${revision} needs.`}</Text>
+      ) : null}
+      {stored.map((a) => (
+        <View key={a.id} style={styles.fileRow} testID="filing-stored-file">
+          <Text style={styles.fileName} numberOfLines={1}>{a.fileName}</Text>
+          <Text variant="muted">{formatBytes(a.sizeBytes)}</Text>
+          <Text variant="muted" style={styles.saved}>{revision !== undefined ? `On revision ${revision}` : 'Saved with the draft'}</Text>
+        </View>
+      ))}
       {files.map((f, i) => (
         <View key={`${f.name}-${i}`} style={styles.fileRow} testID="filing-file">
           <Text style={styles.fileName} numberOfLines={1}>{f.name}</Text>
@@ -70,7 +85,7 @@ export function FilesSection({ files, onChange, savedFiles, needsDataSheet, miss
           )}
         </View>
       ))}
-      <FieldError message={fileError ?? (files.length === 0 ? (missing ?? undefined) : undefined)} testID="filing-files-error" />
+      <FieldError message={fileError ?? (files.length + stored.length === 0 ? (missing ?? undefined) : undefined)} testID="filing-files-error" />
       <Button kind="secondary" label="Add files" onPress={addFiles} testID="filing-add-files" />
     </View>
   );

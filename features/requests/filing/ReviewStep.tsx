@@ -3,7 +3,7 @@ import { useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { labelledBodyFields } from '../../../shared/requests/bodyFields';
 import { requestTypeLabels } from '../../../shared/requests/requestBody';
-import type { ProjectSummary } from '../../../shared/requests/types';
+import type { AttachmentSummary, ProjectSummary } from '../../../shared/requests/types';
 import { Button } from '../../ui/Button';
 import { Text } from '../../ui/Text';
 import { colors, radius, space } from '../../ui/theme';
@@ -31,7 +31,9 @@ function Section({ step, rows, onChange }: { step: FilingStep; rows: Row[]; onCh
   );
 }
 
-export function ReviewStep({ control, projects, files, onChange }: { control: FilingControl; projects: ProjectSummary[]; files: PickedFile[]; onChange: (s: FilingStep) => void }) {
+type Props = { control: FilingControl; projects: ProjectSummary[]; files: PickedFile[]; stored?: readonly AttachmentSummary[]; onChange: (s: FilingStep) => void };
+
+export function ReviewStep({ control, projects, files, stored = [], onChange }: Props) {
   const values = useWatch({ control }) as FilingFormValues;
   const rows = labelledBodyFields(draftBodyFrom(values) ?? {});
   const project = projects.find((p) => p.id === values.projectId);
@@ -44,7 +46,11 @@ export function ReviewStep({ control, projects, files, onChange }: { control: Fi
       <Section step="departure" rows={on('departure')} onChange={onChange} />
       <Section
         step="files"
-        rows={files.length ? files.map((f, i) => ({ label: `File ${i + 1}`, value: f.name })) : [{ label: 'Files', value: 'None added' }]}
+        rows={
+          files.length + stored.length
+            ? [...stored.map((a) => a.fileName), ...files.map((f) => f.name)].map((name, i) => ({ label: `File ${i + 1}`, value: name }))
+            : [{ label: 'Files', value: 'None added' }]
+        }
         onChange={onChange}
       />
     </View>

@@ -18,12 +18,14 @@ type Props = {
   onNext: () => void;
   onFile: () => void;
   onSaveDraft: () => void;
+  // The last step's button, e.g. "Resubmit as revision 2".
+  fileLabel?: string;
   // Why the last press did not move on. Below the buttons: a message above them that vanishes as
   // a box loses focus would move the button out from under the finger pressing it.
   attention?: ReactNode;
 };
 
-export function StepNav({ first, last, busy, progress, saving, draftNotice, onBack, onNext, onFile, onSaveDraft, attention }: Props) {
+export function StepNav({ first, last, busy, progress, saving, draftNotice, onBack, onNext, onFile, onSaveDraft, fileLabel = 'File the request', attention }: Props) {
   return (
     <View style={styles.wrap}>
       <View style={styles.row}>
@@ -34,7 +36,7 @@ export function StepNav({ first, last, busy, progress, saving, draftNotice, onBa
         )}
         <View style={styles.item}>
           {last ? (
-            <Button label="File the request" busy={busy} onPress={onFile} testID="filing-submit" />
+            <Button label={fileLabel} busy={busy} onPress={onFile} testID="filing-submit" />
           ) : (
             <Button label="Next" onPress={onNext} disabled={busy} testID="filing-next" />
           )}

@@ -1,6 +1,8 @@
 // The filing form's draft, on the device and on Spanrelay. What is typed is kept on the device a
 // moment after each change; "Save draft" sends it to the server, or, with the connection down,
 // queues it and sends it when the browser says the connection is back (or the screen next opens).
+// A request already on Spanrelay (a draft carried on, a returned request being revised) is kept
+// under its own id, so reopening it on this device finds what was typed there.
 import { useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'expo-router';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
@@ -14,6 +16,7 @@ import { browserOnline, useOnline } from '../../drafts/useOnline';
 import { useCreateDraft, useUpdateDraft } from '../api';
 import { fetchFreshDetail } from './freshDraft';
 import { draftBodyFrom } from './draftBody';
+import { isEditableState, requestCopyId, seedForRequest } from './editRequest';
 import { emptyFiling, type FilingFormValues } from './formValues';
 import { isFilingStep, type FilingStep } from './steps';
 import { filingValuesFrom } from './valuesFromDraft';
@@ -38,7 +41,10 @@ function withBlanks(values: FilingFormValues): FilingFormValues {
   return { ...blank, ...values };
 }
 
-export function useFilingDraft() {
+// The request opened for editing, and its current revision as the form's boxes.
+export type OpenedRequest = { detail: RequestDetail; values: FilingFormValues };
+
+export function useFilingDraft(opened?: OpenedRequest) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const { data: actor } = useActor();
@@ -47,8 +53,12 @@ export function useFilingDraft() {
   const updateDraft = useUpdateDraft();
   const store = useMemo(deviceStore, []);
 
-  const [localId, setLocalId] = useState(() => newLocalId());
-  const [server, setServer] = useState<ServerDraftRef | null>(null);
+  const [localId, setLocalId] = useState(() => (opened ? requestCopyId(opened.detail.id) : newLocalId()));
+  const [server, setServer] = useState<ServerDraftRef | null>(() => (opened ? refOf(opened.detail) : null));
+  const [adopted, setAdopted] = useState(!opened);
+  // What the form held when it opened: a copy no different from it is not worth keeping.
+  const baseline = useRef<FilingFormValues | null>(opened?.values ?? null);
+  const noun = opened?.detail.state === 'revising' ? 'request' : 'draft';
   const [notice, setNotice] = useState<DraftNotice | null>(null);
   const [saving, setSaving] = useState(false);
   const [seed, setSeed] = useState<FormSeed>({ key: 0, values: null, step: 'kind', pickAgain: [] });
@@ -104,7 +114,7 @@ export function useFilingDraft() {
         pendingKeep.current = null;
         const exists = userId ? readDraft(store, userId, current.current.localId) !== null : false;
         // An untouched form (at most a kind chosen) is not a draft worth offering later.
-        if (!exists && JSON.stringify(values) === JSON.stringify(emptyFiling(values.type, values.projectId))) return;
+        if (!exists && JSON.stringify(values) === JSON.stringify(baseline.current ?? emptyFiling(values.type, values.projectId))) return;
         writeNow({});
       }, KEEP_AFTER_MS);
     },
@@ -144,15 +154,15 @@ export function useFilingDraft() {
       if (!ref || err.status !== 409) return false;
       const fresh = await fetchFreshDetail(queryClient, ref.id).catch(() => null);
       if (!fresh) return false;
-      if (fresh.state !== 'drafting') {
+      if (!isEditableState(fresh.state)) {
         if (userId) removeDraft(store, userId, current.current.localId);
         router.replace(`/requests/${fresh.id}`);
         return true;
       }
-      reloadFrom(fresh, 'Someone changed this draft on Spanrelay since you opened it. It has been reloaded with their version; check it and save again.');
+      reloadFrom(fresh, `Someone changed this ${noun} on Spanrelay since you opened it. It has been reloaded with their version; check it and save again.`);
       return true;
     },
-    [queryClient, reloadFrom, router, store, userId],
+    [queryClient, reloadFrom, router, store, userId, noun],
   );
 
   const queueHere = useCallback(() => {
@@ -237,6 +247,22 @@ export function useFilingDraft() {
 
   useEffect(() => () => void (pendingKeep.current && clearTimeout(pendingKeep.current)), []);
 
+  // A request opened for editing starts from this device's copy of it when that is still current.
+  useEffect(() => {
+    if (!opened || adopted || !userId) return;
+    const kept = readDraft<FilingFormValues>(store, userId, requestCopyId(opened.detail.id));
+    const start = seedForRequest(opened.detail, opened.values, kept);
+    const values = withBlanks(start.values);
+    const step = isFilingStep(start.step) ? start.step : 'kind';
+    latest.current = { values, step };
+    if (start.setAside) removeDraft(store, userId, requestCopyId(opened.detail.id));
+    setSeed((s) => ({ key: s.key + 1, values, step, pickAgain: start.pickAgain }));
+    if (start.queued) setNotice({ tone: 'info', text: keptOnDevice });
+    else if (start.unsaved) setNotice({ tone: 'info', text: 'Carrying on with what you typed on this device; it is not saved to Spanrelay yet.' });
+    else if (start.setAside) setNotice({ tone: 'caution', text: `This ${noun} changed on Spanrelay after this device last kept your typing; the form shows the version on Spanrelay.` });
+    setAdopted(true);
+  }, [opened, adopted, userId, store, noun]);
+
   /** Carries on with a draft kept on this device, in place of the blank form. */
   const carryOn = useCallback(
     async (d: KeptDraft) => {
@@ -250,7 +276,7 @@ export function useFilingDraft() {
       setNotice(d.queued ? { tone: 'info', text: keptOnDevice } : null);
       if (d.server && browserOnline()) {
         const fresh = await fetchFreshDetail(queryClient, d.server.id).catch(() => null);
-        if (fresh && fresh.state !== 'drafting') {
+        if (fresh && !isEditableState(fresh.state)) {
           if (userId) removeDraft(store, userId, d.localId);
           router.replace(`/requests/${fresh.id}`);
           return;
@@ -278,7 +304,7 @@ export function useFilingDraft() {
   }, [store, userId]);
 
   return {
-    ready: userId !== null,
+    ready: userId !== null && adopted,
     online,
     localId,
     server,

@@ -1,0 +1,1 @@
+export { EditRequestScreen as default } from '../../../../features/requests/EditRequestScreen';
