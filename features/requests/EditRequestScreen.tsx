@@ -13,32 +13,20 @@ import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
-import { UploadProgressList } from '../uploads/UploadProgressList';
 import { useMyProjects, useRequestDetail } from './api';
 import { editModeFor, filesOfCurrentRevision, revisionBody, type EditMode } from './filing/editRequest';
-import { FilingFailureNotice } from './filing/FilingFailureNotice';
+import { DraftFilingForm } from './filing/DraftFilingForm';
+import { ReturnComment } from './filing/ReturnComment';
 import { filingValuesFrom } from './filing/valuesFromDraft';
 import { useFilingDraft } from './filing/useFilingDraft';
 import { useFilingRun } from './filing/useFilingRun';
-import { formatWhen, requestTypeLabel } from './format';
-import { RequestFilingForm } from './RequestFilingForm';
+import { requestTypeLabel } from './format';
 
 function BackLink({ id, label = 'Back to the request' }: { id: string; label?: string }) {
   return (
     <Link href={`/requests/${id}`} style={styles.link} testID="edit-back">
       {label}
     </Link>
-  );
-}
-
-// The comment that sent it back, so the person revises with it in front of them.
-function ReturnComment({ r }: { r: RequestDetail }) {
-  const returned = [...r.trail].reverse().find((e) => e.eventType === 'return_for_revision');
-  if (!returned?.comment) return null;
-  return (
-    <Notice tone="info" testID="edit-return-comment">
-      {`Returned by ${returned.actor.name} ${formatWhen(returned.at)}: “${returned.comment}”`}
-    </Notice>
   );
 }
 
@@ -52,7 +40,6 @@ function EditForm({ r, mode, projects }: { r: RequestDetail; mode: EditMode; pro
     move: (saved, comment) => (revising ? { type: 'resubmit', version: saved.version, comment: comment ?? '' } : { type: 'submit', version: saved.version }),
     onFiled: (filed) => router.replace(revising ? `/requests/${filed.id}` : { pathname: '/requests/[id]', params: { id: filed.id, filed: '1' } }),
   });
-  const unsaved = run.files.filter((f) => !run.savedFiles.has(f));
 
   return (
     <>
@@ -62,34 +49,16 @@ function EditForm({ r, mode, projects }: { r: RequestDetail; mode: EditMode; pro
         </Notice>
       )}
       {draft.ready ? (
-        <RequestFilingForm
-          key={draft.seed.key}
+        <DraftFilingForm
+          draft={draft}
+          run={run}
           projects={projects}
-          initialValues={draft.seed.values ?? opened.values}
-          initialStep={draft.seed.step}
-          busy={run.phase !== null}
-          progress={run.progress}
+          blank={opened.values}
           projectLocked
-          files={unsaved}
-          onFilesChange={run.changeFiles}
-          savedFiles={run.savedFiles}
-          storedFiles={filesOfCurrentRevision(r)}
-          offline={!draft.online}
-          pickAgain={draft.seed.pickAgain}
-          serverFieldErrors={run.failure?.error.fields}
-          resubmit={revising ? { revision: r.currentRevision, before: revisionBody(r, r.currentRevision - 1) } : undefined}
           fileLabel={fileLabel}
-          status={
-            <>
-              <UploadProgressList items={run.uploads.items} onCancel={run.uploads.cancel} />
-              <FilingFailureNotice failure={run.failure} server={draft.server} fileLabel={fileLabel} />
-            </>
-          }
-          saving={draft.saving}
-          draftNotice={draft.notice}
-          onKeep={draft.keep}
-          onSaveDraft={(values, step) => void draft.save(values, step)}
-          onSubmit={(body, comment) => void run.file(body, comment)}
+          files={run.files.filter((f) => !run.savedFiles.has(f))}
+          storedFiles={filesOfCurrentRevision(r)}
+          resubmit={revising ? { revision: r.currentRevision, before: revisionBody(r, r.currentRevision - 1) } : undefined}
         />
       ) : (
         <ActivityIndicator accessibilityLabel="Opening the request" />
@@ -151,7 +120,7 @@ export function EditRequestScreen() {
         </View>
       ) : (
         <>
-          {mode === 'revise' ? <ReturnComment r={r} /> : null}
+          {mode === 'revise' ? <ReturnComment r={r} testID="edit-return-comment" /> : null}
           {mode === 'revise' ? (
             <Text variant="muted">{`Revision ${r.currentRevision} starts as a copy of revision ${r.currentRevision - 1}. Change what was asked, add any files, and resubmit; the section engineer sees what changed.`}</Text>
           ) : null}

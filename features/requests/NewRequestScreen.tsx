@@ -6,15 +6,13 @@ import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { space } from '../ui/theme';
-import { UploadProgressList } from '../uploads/UploadProgressList';
 import { useMyProjects } from './api';
 import { DeviceDraftOffer } from './filing/DeviceDraftOffer';
 import { requestOfCopy } from './filing/editRequest';
-import { FilingFailureNotice } from './filing/FilingFailureNotice';
+import { DraftFilingForm } from './filing/DraftFilingForm';
 import { emptyFiling } from './filing/formValues';
 import { useFilingDraft, type KeptDraft } from './filing/useFilingDraft';
 import { useFilingRun } from './filing/useFilingRun';
-import { RequestFilingForm } from './RequestFilingForm';
 
 const fileLabel = 'File the request';
 
@@ -54,31 +52,13 @@ export function NewRequestScreen() {
       {projects.error ? <Notice tone="error">{projects.error.message}</Notice> : null}
       {projects.data && projects.data.length === 0 ? <Notice tone="info">You are not a member of any project yet; ask your administrator.</Notice> : null}
       {projects.data && projects.data.length > 0 && draft.ready ? (
-        <RequestFilingForm
-          key={draft.seed.key}
+        <DraftFilingForm
+          draft={draft}
+          run={run}
           projects={projects.data}
-          initialValues={draft.seed.values ?? emptyFiling('other_deviation', single)}
-          initialStep={draft.seed.step}
-          busy={run.phase !== null}
-          progress={run.progress}
+          blank={emptyFiling('other_deviation', single)}
           projectLocked={draft.server !== null}
-          files={run.files}
-          onFilesChange={run.changeFiles}
-          savedFiles={run.savedFiles}
-          offline={!draft.online}
-          pickAgain={draft.seed.pickAgain}
-          serverFieldErrors={run.failure?.error.fields}
-          status={
-            <>
-              <UploadProgressList items={run.uploads.items} onCancel={run.uploads.cancel} />
-              <FilingFailureNotice failure={run.failure} server={draft.server} fileLabel={fileLabel} />
-            </>
-          }
-          saving={draft.saving}
-          draftNotice={draft.notice}
-          onKeep={draft.keep}
-          onSaveDraft={(values, step) => void draft.save(values, step)}
-          onSubmit={(body) => void run.file(body)}
+          fileLabel={fileLabel}
         />
       ) : null}
     </Screen>

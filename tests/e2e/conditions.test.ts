@@ -7,43 +7,21 @@ import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoEmail, demoPassword } from '../../server/demo/demoScenario';
+import { demoEmail } from '../../server/demo/demoScenario';
 import type { ConditionList } from '../../shared/conditions/types';
 import type { ProjectSummary, RequestDetail } from '../../shared/requests/types';
-import type { Role } from '../../shared/roles';
 import { launchChromium } from '../support/browser';
 import { otherDeviationBody } from '../support/requestFixtures';
 import { samplePhoto } from '../support/sampleFiles';
 import { artifactsDir } from '../support/testSettings';
+import { apiAs, type ApiPerson } from './apiPeople';
 import { base, screenshotWhole, signInAs } from './helpers';
 
 const shots = join(artifactsDir(), 'screenshots');
 const phone = { width: 390, height: 844 };
 const wide = { width: 1440, height: 900 };
 
-// One demo person's session over plain HTTP, as a browser on the app's own origin would hold it.
-async function apiAs(role: Role) {
-  const signIn = await fetch(`${base}/api/auth/sign-in/email`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', origin: base },
-    body: JSON.stringify({ email: demoEmail(role), password: demoPassword }),
-  });
-  if (signIn.status !== 200) throw new Error(`sign-in as ${role} answered ${signIn.status}: ${await signIn.text()}`);
-  const cookie = signIn.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-  const call = async <T>(path: string, init: { method?: string; json?: unknown; body?: FormData } = {}): Promise<T> => {
-    const res = await fetch(`${base}${path}`, {
-      method: init.method ?? (init.json || init.body ? 'POST' : 'GET'),
-      headers: { cookie, origin: base, ...(init.json ? { 'content-type': 'application/json' } : {}) },
-      body: init.json ? JSON.stringify(init.json) : init.body,
-    });
-    const text = await res.text();
-    if (!res.ok) throw new Error(`${role} ${path} answered ${res.status}: ${text}`);
-    return JSON.parse(text) as T;
-  };
-  return call;
-}
-
-type Api = Awaited<ReturnType<typeof apiAs>>;
+type Api = ApiPerson;
 let people: Record<'contractor' | 'section_engineer' | 'central_office' | 'engineer_of_record' | 'field_inspector', Api>;
 
 // Files a request on the demo bridge and walks it to the engineer of record's approval with the

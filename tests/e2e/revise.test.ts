@@ -68,6 +68,7 @@ describe('revising a returned request through the filing form', () => {
     expect(await page.getByTestId('action-resubmit').count()).toBe(0);
     expect(await page.getByTestId('action-withdraw').count()).toBe(1);
     expect(await page.getByTestId('request-revise').textContent()).toBe('Revise the request');
+    expect(await page.getByTestId('request-return-comment').textContent()).toContain(returnComment);
     await shot('1-returned');
 
     await page.getByTestId('request-revise').click();
@@ -141,7 +142,7 @@ describe('revising a returned request through the filing form', () => {
     const proposed = `Move the outlet 18 in toward span 3; brackets at 4 ft on centres (${tag}).`;
     await page.getByTestId('filing-proposed-change').fill(proposed);
     await page.getByTestId('filing-save-draft').click();
-    await expect.poll(() => page.getByTestId('draft-notice').textContent(), { timeout: 10_000 }).toMatch(/^Draft saved to Spanrelay as PC-0114-\d{3}\.$/);
+    await expect.poll(() => page.getByTestId('draft-notice').textContent(), { timeout: 10_000 }).toBe(`Revision 2 saved to Spanrelay as ${r.number}.`);
     await screenshotWhole(page, wide, join(shots, 'revise-wide-edit-form.png'));
 
     // Saved to revision 2, still at the contractor's desk.

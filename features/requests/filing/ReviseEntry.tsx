@@ -7,6 +7,7 @@ import { Button } from '../../ui/Button';
 import { Text } from '../../ui/Text';
 import { space } from '../../ui/theme';
 import { editModeFor } from './editRequest';
+import { ReturnComment } from './ReturnComment';
 
 export function ReviseEntry({ request, actorId }: { request: RequestDetail; actorId: string | undefined }) {
   const router = useRouter();
@@ -15,16 +16,20 @@ export function ReviseEntry({ request, actorId }: { request: RequestDetail; acto
   const revise = mode === 'revise';
   return (
     <View style={styles.wrap} testID="request-revise-entry">
+      {revise ? <ReturnComment r={request} testID="request-return-comment" /> : null}
       <Text variant="muted">
         {revise
           ? `It was returned to you. Change it in the filing form, say what changed, and resubmit it as revision ${request.currentRevision}.`
           : 'This draft has not been filed yet. Carry on in the filing form and file it from there.'}
       </Text>
-      <Button label={revise ? 'Revise the request' : 'Continue the draft'} onPress={() => router.push(`/requests/${request.id}/edit`)} testID="request-revise" />
+      <View style={styles.button}>
+        <Button label={revise ? 'Revise the request' : 'Continue the draft'} onPress={() => router.push(`/requests/${request.id}/edit`)} testID="request-revise" />
+      </View>
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  wrap: { gap: space.sm, alignItems: 'flex-start' },
+  wrap: { gap: space.sm, alignItems: 'stretch' },
+  button: { alignSelf: 'flex-start' },
 });

@@ -59,6 +59,7 @@ export function useFilingDraft(opened?: OpenedRequest) {
   // What the form held when it opened: a copy no different from it is not worth keeping.
   const baseline = useRef<FilingFormValues | null>(opened?.values ?? null);
   const noun = opened?.detail.state === 'revising' ? 'request' : 'draft';
+  const savedWords = opened?.detail.state === 'revising' ? `Revision ${opened.detail.currentRevision} saved to Spanrelay` : sentToServer;
   const [notice, setNotice] = useState<DraftNotice | null>(null);
   const [saving, setSaving] = useState(false);
   const [seed, setSeed] = useState<FormSeed>({ key: 0, values: null, step: 'kind', pickAgain: [] });
@@ -190,7 +191,7 @@ export function useFilingDraft(opened?: OpenedRequest) {
         setServer(ref);
         current.current = { ...current.current, server: ref };
         writeNow({ server: ref, queued: false, refused: null });
-        setNotice({ tone: 'ok', text: `${sentToServer} as ${ref.number}.` });
+        setNotice({ tone: 'ok', text: `${savedWords} as ${ref.number}.` });
       } catch (err) {
         if (isOffline(err)) queueHere();
         else if (!(err instanceof ApiError && (await onServerRefusal(err)))) setNotice({ tone: 'error', text: err instanceof Error ? err.message : String(err) });
@@ -199,7 +200,7 @@ export function useFilingDraft(opened?: OpenedRequest) {
         refreshKept();
       }
     },
-    [send, writeNow, queueHere, onServerRefusal, refreshKept],
+    [send, writeNow, queueHere, onServerRefusal, refreshKept, savedWords],
   );
 
   /** Sends what waits on the device; the open draft's notice changes once it is through. */
@@ -231,7 +232,7 @@ export function useFilingDraft(opened?: OpenedRequest) {
       if ('server' in o) {
         setServer(o.server);
         current.current = { ...current.current, server: o.server };
-        setNotice({ tone: 'ok', text: `${sentToServer} as ${o.server.number}.` });
+        setNotice({ tone: 'ok', text: `${savedWords} as ${o.server.number}.` });
       } else if ('refused' in o) setNotice({ tone: 'error', text: `The draft kept on this device was not saved to Spanrelay: ${o.refused}` });
     }
     refreshKept();
