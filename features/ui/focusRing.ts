@@ -10,6 +10,8 @@ const darkAreas = ['nav-side', 'shell-bar'];
 export const focusRingCss = [
   `:focus-visible { outline: 3px solid ${colors.slate} !important; outline-offset: 2px; }`,
   `${darkAreas.map((id) => `[data-testid="${id}"] :focus-visible`).join(', ')} { outline-color: ${colors.slateLight} !important; }`,
+  // The bottom tabs touch the window's edges, where a ring drawn outside would be cut off.
+  `[data-testid="nav-tabs"] :focus-visible { outline-offset: -3px; }`,
 ].join('\n');
 
 let installed = false;
