@@ -128,7 +128,52 @@ describe('revising a returned request through the filing form', () => {
     await context.close();
   });
 
-  it(`the edit form on a wide screen saves a draft of the revision; someone else is told it is not theirs (${wide.width}×${wide.height})`, async () => {
+  it(`a draft is carried on from its page, kept on the device across a reload, and filed (phone ${phone.width}×${phone.height})`, async () => {
+    const tag = randomUUID().slice(0, 6);
+    const projects = await contractor<ProjectSummary[]>('/api/projects');
+    const project = projects.find((p) => p.code === 'PC-0114')!;
+    const r = await contractor<RequestDetail>('/api/requests', { json: otherDeviationBody(project.id, `Relocate drain outlet at pier 1 (draft ${tag})`) });
+    const context = await browser.newContext({ viewport: phone });
+    const page = await context.newPage();
+    const keptKeys = () => page.evaluate<string[]>(`Object.keys(localStorage).filter((k) => k.endsWith('.request-${r.id}'))`);
+
+    await signInAs(page, 'contractor');
+    await openRequest(page, r.id);
+    expect(await page.getByTestId('request-state').textContent()).toBe('Drafting');
+    expect(await page.getByTestId('action-submit').count()).toBe(0);
+    expect(await page.getByTestId('request-revise').textContent()).toBe('Continue the draft');
+    await page.getByTestId('request-revise').click();
+    await page.waitForURL(new RegExp(`/requests/${r.id}/edit$`));
+    expect(await page.getByTestId('edit-title').textContent()).toBe('Continue the draft');
+    await expect.poll(() => stepText(page), { timeout: 15_000 }).toBe('Step 1 of 5: Kind of request');
+    await nextStep(page, steps.where);
+    const title = `Relocate drain outlet DR-1 at pier 1 (draft ${tag})`;
+    await page.getByTestId('filing-title').fill(title);
+    await expect.poll(keptKeys, { timeout: 5_000 }).toHaveLength(1);
+
+    // The typing survives a reload, on the step it was left at, and says it is not on Spanrelay yet.
+    await page.reload();
+    await expect.poll(() => stepText(page), { timeout: 15_000 }).toBe(steps.where);
+    expect(await page.getByTestId('filing-title').inputValue()).toBe(title);
+    expect(await page.getByTestId('draft-notice').textContent()).toContain('not saved to Spanrelay yet');
+
+    await nextStep(page, steps.departure);
+    await nextStep(page, steps.files);
+    await nextStep(page, steps.review);
+    expect(await page.getByTestId('filing-resubmit-comment').count()).toBe(0);
+    expect(await page.getByTestId('filing-submit').textContent()).toBe('File the request');
+    await page.getByTestId('filing-submit').click();
+    await page.waitForURL(new RegExp(`/requests/${r.id}\\?filed=1$`), { timeout: 30_000 });
+    await expect.poll(() => page.getByTestId('request-filed').count(), { timeout: 15_000 }).toBe(1);
+    expect(await page.getByTestId('request-state').textContent()).toBe('With the section engineer');
+    expect(await keptKeys()).toEqual([]);
+    const after = await contractor<RequestDetail>(`/api/requests/${r.id}`);
+    expect(after).toMatchObject({ state: 'section_review', title, currentRevision: 1 });
+    expect(after.trail.map((e) => e.eventType)).toEqual(['created', 'submit']);
+    await context.close();
+  });
+
+  it(`the edit form on a wide screen saves the revision, reloads it when changed elsewhere; someone else is told it is not theirs (${wide.width}×${wide.height})`, async () => {
     const tag = randomUUID().slice(0, 6);
     const r = await returnedRequest(`Relocate drain outlet at pier 3 (revise wide ${tag})`, `Add the downspout bracket spacing (${tag}).`);
     const context = await browser.newContext({ viewport: wide });
@@ -149,6 +194,18 @@ describe('revising a returned request through the filing form', () => {
     const saved = await contractor<RequestDetail>(`/api/requests/${r.id}`);
     expect(saved).toMatchObject({ state: 'revising', currentRevision: 2, version: r.version + 1 });
     expect(saved.revisions.find((v) => v.revision === 2)!.body.proposedChange).toBe(proposed);
+
+    // Changed elsewhere in between: the next save is refused, and the form reloads and says so.
+    const elsewhere = `Move the outlet 20 in toward span 3 (changed elsewhere ${tag}).`;
+    await contractor<RequestDetail>(`/api/requests/${r.id}/draft`, {
+      method: 'PUT',
+      json: { version: saved.version, body: { ...saved.revisions.find((v) => v.revision === 2)!.body, proposedChange: elsewhere } },
+    });
+    await page.getByTestId('filing-reason').fill(`The outlet lands on the pier cap step (${tag}).`);
+    await page.getByTestId('filing-save-draft').click();
+    await expect.poll(() => page.getByTestId('draft-notice').textContent(), { timeout: 10_000 }).toContain('Someone changed this request on Spanrelay since you opened it');
+    await expect.poll(() => page.getByTestId('filing-proposed-change').inputValue()).toBe(elsewhere);
+    expect((await contractor<RequestDetail>(`/api/requests/${r.id}`)).revisions.find((v) => v.revision === 2)!.body.proposedChange).toBe(elsewhere);
     await context.close();
 
     const other = await browser.newContext({ viewport: wide });
