@@ -107,7 +107,7 @@ export function EditRequestScreen() {
         <Text variant="title" accessibilityRole="header" testID="edit-title">
           {mode === 'revise' ? `Revise the request: revision ${r.currentRevision}` : mode === 'continue' ? 'Continue the draft' : r.title}
         </Text>
-        {mode ? <BackLink id={id} label="Back to the request without resubmitting" /> : null}
+        {mode ? <BackLink id={id} label={mode === 'revise' ? 'Back to the request without resubmitting' : 'Back to the request without filing'} /> : null}
       </View>
       {!mode || !project ? (
         <View style={styles.refused} testID="edit-not-allowed">

@@ -175,7 +175,13 @@ describe('revising a returned request through the filing form', () => {
 
   it(`the edit form on a wide screen saves the revision, reloads it when changed elsewhere; someone else is told it is not theirs (${wide.width}×${wide.height})`, async () => {
     const tag = randomUUID().slice(0, 6);
-    const r = await returnedRequest(`Relocate drain outlet at pier 3 (revise wide ${tag})`, `Add the downspout bracket spacing (${tag}).`);
+    const returned = await returnedRequest(`Relocate drain outlet at pier 3 (revise wide ${tag})`, `Add the downspout bracket spacing (${tag}).`);
+    // A file already stored with revision 2 (from an earlier try whose resubmit did not go through).
+    const form = new FormData();
+    const stored = `Bracket spacing sketch ${tag}.jpg`;
+    form.append('files', new Blob([new Uint8Array(await samplePhoto(80, 60, '#5d6b4f'))], { type: 'image/jpeg' }), stored);
+    await contractor(`/api/requests/${returned.id}/attachments?purpose=revision`, { body: form });
+    const r = await contractor<RequestDetail>(`/api/requests/${returned.id}`);
     const context = await browser.newContext({ viewport: wide });
     const page = await context.newPage();
 
@@ -184,6 +190,14 @@ describe('revising a returned request through the filing form', () => {
     await expect.poll(() => stepText(page), { timeout: 15_000 }).toBe('Step 1 of 5: Kind of request');
     await nextStep(page, steps.where);
     await nextStep(page, steps.departure);
+    await nextStep(page, steps.files);
+    // Revision 1's files stay with it; revision 2's own are listed as stored, not to be sent again.
+    expect(await page.getByTestId('filing-stored-file').count()).toBe(1);
+    expect(await page.getByTestId('filing-stored-file').textContent()).toContain(`${stored}`);
+    expect(await page.getByTestId('filing-stored-file').textContent()).toContain('On revision 2');
+    expect(await page.getByTestId('filing-file').count()).toBe(0);
+    await page.getByTestId('filing-back').click();
+    await expect.poll(() => stepText(page)).toBe(steps.departure);
     const proposed = `Move the outlet 18 in toward span 3; brackets at 4 ft on centres (${tag}).`;
     await page.getByTestId('filing-proposed-change').fill(proposed);
     await page.getByTestId('filing-save-draft').click();
