@@ -4,6 +4,7 @@
 import { Link, useLocalSearchParams, useRouter } from 'expo-router';
 import { useRef, useState } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import type { RequestType } from '../../shared/requests/requestBody';
 import { stateLabel } from '../../shared/requests/states';
 import type { ProjectSummary, RequestDetail } from '../../shared/requests/types';
 import { ApiError } from '../api/http';
@@ -32,7 +33,7 @@ function BackLink({ id, label = 'Back to the request' }: { id: string; label?: s
 
 function EditForm({ r, mode, projects }: { r: RequestDetail; mode: EditMode; projects: ProjectSummary[] }) {
   const router = useRouter();
-  const [opened] = useState(() => ({ detail: r, values: filingValuesFrom(revisionBody(r, r.currentRevision) ?? { type: r.type as RequestDetail['revisions'][number]['body']['type'], projectId: r.project.id }) }));
+  const [opened] = useState(() => ({ detail: r, values: filingValuesFrom(revisionBody(r, r.currentRevision) ?? { type: r.type as RequestType, projectId: r.project.id }) }));
   const draft = useFilingDraft(opened);
   const revising = mode === 'revise';
   const fileLabel = revising ? `Resubmit as revision ${r.currentRevision}` : 'File the request';
@@ -45,7 +46,7 @@ function EditForm({ r, mode, projects }: { r: RequestDetail; mode: EditMode; pro
     <>
       {draft.online ? null : (
         <Notice tone="caution" testID="filing-offline">
-          You are offline. What you type is kept on this device; saving to Spanrelay and resubmitting wait for the connection.
+          {`You are offline. What you type is kept on this device; saving to Spanrelay and ${revising ? 'resubmitting' : 'filing'} wait for the connection.`}
         </Notice>
       )}
       {draft.ready ? (

@@ -196,6 +196,8 @@ export function RequestFilingForm(props: Props) {
     (found) => {
       setRefused(true);
       setFilesMissing(dataSheetLacking() ? dataSheetMissing : null);
+      // Every refusal at once, so the comment is not a second surprise once the boxes are right.
+      if (resubmit) setCommentError(resubmitCommentProblem(comment) ?? undefined);
       const kind = getValues('type');
       const paths = errorPaths(found);
       const step = earliestStep(paths, kind);
