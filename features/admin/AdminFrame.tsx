@@ -7,6 +7,7 @@ import { useActor } from '../auth/useActor';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
+import { ariaCurrent } from '../ui/webAria';
 import { colors, fonts, radius, space } from '../ui/theme';
 
 const tabs = [
@@ -36,7 +37,7 @@ export function AdminFrame({ title, intro, children }: { title: string; intro: s
           // Flattened: a Link passing its child a style array fails on the web.
           return (
             <Link key={tab.href} href={tab.href} asChild>
-              <Pressable accessibilityRole="link" accessibilityState={{ selected: current }} testID={tab.testID} style={StyleSheet.flatten([styles.tab, current && styles.current])}>
+              <Pressable accessibilityRole="link" {...ariaCurrent(current)} testID={tab.testID} style={StyleSheet.flatten([styles.tab, current && styles.current])}>
                 <Text style={[styles.tabText, current && styles.currentText]}>{tab.label}</Text>
               </Pressable>
             </Link>

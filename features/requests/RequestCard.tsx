@@ -5,6 +5,7 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import { stateLabel } from '../../shared/requests/states';
 import type { RequestSummary } from '../../shared/requests/types';
 import { Text } from '../ui/Text';
+import { ariaCurrent } from '../ui/webAria';
 import { colors, radius, space } from '../ui/theme';
 import { deskClockText, formatWhen, requestTypeLabel } from './format';
 
@@ -19,7 +20,7 @@ export function RequestCard({ request: r, selected = false, onSelect }: Props) {
       // Beside the list it shows the request in the pane, which is a button's job; a link without
       // an address would ignore Enter on the web.
       accessibilityRole={onSelect ? 'button' : 'link'}
-      accessibilityState={{ selected }}
+      {...ariaCurrent(selected, 'true')}
       accessibilityLabel={`${r.number}, ${r.title}, ${stateLabel(r.state)}${r.overdue ? ', overdue' : ''}`}
       onPress={onSelect ? () => onSelect(r.id) : undefined}
       testID="request-card"

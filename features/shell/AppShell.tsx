@@ -10,6 +10,7 @@ import { useRequestCounts } from '../requests/api';
 import { useBreakpoint } from '../ui/breakpoints';
 import { installFocusRing } from '../ui/focusRing';
 import { Icon } from '../ui/icons';
+import { ariaCurrent } from '../ui/webAria';
 import { Text } from '../ui/Text';
 import { colors, fonts, radius, space } from '../ui/theme';
 import { activeDestination, destinationsFor, type Destination } from './destinations';
@@ -28,7 +29,7 @@ function NavItem({ d, active, badge, layout }: { d: Destination; active: boolean
       <Pressable
         accessibilityRole="link"
         accessibilityLabel={label}
-        accessibilityState={{ selected: active }}
+        {...ariaCurrent(active)}
         testID={`nav-${d.key}`}
         // Flattened: a Link passing its child a style array fails on the web.
         style={StyleSheet.flatten([layout === 'tab' ? styles.tab : styles.sideItem, active && (layout === 'tab' ? styles.tabActive : styles.sideItemActive)])}
@@ -85,7 +86,7 @@ export function AppShell({ actor, children }: { actor: Actor; children: ReactNod
           <SignOutButton tone="bar" />
         </View>
         <View style={styles.body}>{children}</View>
-        <View style={styles.tabs} accessibilityRole="tablist" testID="nav-tabs">
+        <View style={styles.tabs} role="navigation" testID="nav-tabs">
           {items.map((d) => (
             <NavItem key={d.key} d={d} layout="tab" active={active === d.key} badge={d.key === 'desk' ? waiting : null} />
           ))}

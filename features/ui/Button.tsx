@@ -19,7 +19,9 @@ export function Button({ label, onPress, kind = 'primary', busy, disabled, testI
     <Pressable
       accessibilityRole="button"
       accessibilityLabel={accessibilityLabel ?? label}
-      accessibilityState={{ disabled: !!inactive, busy: !!busy }}
+      // aria-* rather than accessibilityState: react-native-web writes only these to the page.
+      aria-disabled={!!inactive}
+      aria-busy={!!busy}
       onPress={inactive ? undefined : onPress}
       testID={testID}
       style={({ pressed }) => [styles.base, styles[kind], pressed && styles.pressed, inactive && styles.inactive]}

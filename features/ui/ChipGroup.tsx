@@ -30,7 +30,7 @@ export function ChipGroup<T extends string>({ label, options, value, onChange, a
             <Pressable
               key={o.value ?? '_any'}
               accessibilityRole="radio"
-              accessibilityState={{ checked: chosen }}
+              aria-checked={chosen}
               accessibilityLabel={`${label}: ${o.label}`}
               onPress={() => onChange(o.value)}
               {...spaceAlsoPresses(() => onChange(o.value))}

@@ -20,7 +20,8 @@ export function Choice({ label, detail, chosen, onPress, testID, compact, childr
   return (
     <Pressable
       accessibilityRole="radio"
-      accessibilityState={{ checked: chosen }}
+      // aria-* rather than accessibilityState: react-native-web writes only these to the page.
+      aria-checked={chosen}
       accessibilityLabel={detail ? `${label}. ${detail}` : label}
       onPress={onPress}
       {...spaceAlsoPresses(onPress)}

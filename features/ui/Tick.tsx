@@ -9,7 +9,7 @@ export function Tick({ label, checked, onChange, testID }: { label: string; chec
   return (
     <Pressable
       accessibilityRole="checkbox"
-      accessibilityState={{ checked }}
+      aria-checked={checked}
       accessibilityLabel={label}
       onPress={() => onChange(!checked)}
       {...spaceAlsoPresses(() => onChange(!checked))}
