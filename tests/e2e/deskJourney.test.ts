@@ -16,7 +16,7 @@ import { genesisHash } from '../../shared/trail/canonicalJson';
 import { launchChromium } from '../support/browser';
 import { samplePhoto } from '../support/sampleFiles';
 import { artifactsDir } from '../support/testSettings';
-import { attachFile, fillDeckPlacement, fillRetarder, nextStep, openNewRequest, steps } from './filingSteps';
+import { attachFile, fillDeckPlacement, fillDeckReasonAndSchedule, fillRetarder, nextStep, openNewRequest, steps } from './filingSteps';
 import { base, fillFields, mailFor, screenshotWhole, signInAs } from './helpers';
 
 const shots = join(artifactsDir(), 'screenshots');
@@ -98,13 +98,7 @@ describe.each(viewports)('a deck placement request across every desk ($name)', (
     await nextStep(page, steps.departure);
     await fillDeckPlacement(page);
     await fillRetarder(page);
-    await fillFields(page, {
-      'filing-reason': 'Two pumps are on hand for the whole day; one placement removes the joints over the piers.',
-      'filing-proposed-change': 'Place the whole deck at once with Type D retarded concrete instead of the staged sequence.',
-      'filing-needed-by': '2027-05-10',
-    });
-    await page.getByTestId('filing-cost-none').click();
-    await page.getByTestId('filing-time-impact').fill('-5');
+    await fillDeckReasonAndSchedule(page);
     await expect.poll(() => page.getByTestId('filing-check-verdict').textContent()).toBe('Acceptable by these checks');
     await shot('filing-check');
     await nextStep(page, steps.files);

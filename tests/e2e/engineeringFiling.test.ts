@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RequestPage } from '../../shared/requests/types';
 import { launchChromium } from '../support/browser';
 import { artifactsDir } from '../support/testSettings';
-import { fillDeckPlacement, fillRetarder, nextStep, openNewRequest, stepText, steps } from './filingSteps';
+import { fillDeckPlacement, fillDeckReasonAndSchedule, fillRetarder, nextStep, openNewRequest, stepText, steps } from './filingSteps';
 import { base, fillFields, screenshotWhole, signInAs } from './helpers';
 
 const shots = join(artifactsDir(), 'screenshots');
@@ -18,16 +18,6 @@ const caution = 'engineer of record';
 
 async function fillWhere(page: Page, title: string, where: string) {
   await fillFields(page, { 'filing-title': title, 'filing-location': where });
-}
-
-async function fillCommonRest(page: Page) {
-  await fillFields(page, {
-    'filing-reason': 'Two pumps are on hand for the whole day; one placement removes the joints over the piers.',
-    'filing-proposed-change': 'Place the whole deck at once with Type D retarded concrete instead of the staged sequence.',
-    'filing-needed-by': '2027-05-10',
-  });
-  await page.getByTestId('filing-cost-none').click();
-  await page.getByTestId('filing-time-impact').fill('-5');
 }
 
 describe('engineering checks in the web app', () => {
@@ -65,7 +55,7 @@ describe('engineering checks in the web app', () => {
     expect(await live.getByTestId('engineering-placement-plot').count()).toBe(1);
     expect(await live.getByTestId('engineering-moment-diagram').getAttribute('aria-label')).toContain('Moment diagram of a 3-span girder, 310.0 ft long');
     expect(await live.textContent()).toContain(caution);
-    await fillCommonRest(page);
+    await fillDeckReasonAndSchedule(page);
     await shot('eng-phone-2-live-check.png');
 
     await nextStep(page, steps.files);
@@ -142,7 +132,7 @@ describe('engineering checks in the web app', () => {
     expect(await page.getByTestId('engineering-seal-facts').textContent()).toContain('compression seal');
     expect(await live.textContent()).toContain(caution);
 
-    await fillCommonRest(page);
+    await fillDeckReasonAndSchedule(page);
     await nextStep(page, steps.files);
     // The step with the files will not be left without the data sheet.
     await page.getByTestId('filing-next').click();

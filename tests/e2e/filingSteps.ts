@@ -57,3 +57,14 @@ export async function fillRetarder(page: Page) {
   await page.getByTestId('filing-retarder-product').fill('Type D retarder, trial batch TB-7');
   await page.getByTestId('filing-initial-set').fill('11.5');
 }
+
+// Why, what, when and at what cost, for the one-pour deck of fillDeckPlacement.
+export async function fillDeckReasonAndSchedule(page: Page) {
+  await fillFields(page, {
+    'filing-reason': 'Two pumps are on hand for the whole day; one placement removes the joints over the piers.',
+    'filing-proposed-change': 'Place the whole deck at once with Type D retarded concrete instead of the staged sequence.',
+    'filing-needed-by': '2027-05-10',
+  });
+  await page.getByTestId('filing-cost-none').click();
+  await page.getByTestId('filing-time-impact').fill('-5');
+}
