@@ -31,7 +31,7 @@ const viewports = [
 ] as const;
 type Viewport = (typeof viewports)[number];
 
-type Control = { idx: number; what: string; name: string; width: number; height: number; inNav: boolean; inlineInText: boolean; disabled: boolean; linkWithoutAddress: boolean };
+type Control = { idx: number; what: string; name: string; width: number; height: number; inNav: boolean; inlineInText: boolean; disabled: boolean; linkWithoutAddress: boolean; stateUnsaid: boolean };
 type Stop = { idx: number | null; what: string; inNav: boolean; ring: string | null };
 
 // Runs in the page (a string: these tests are checked without the DOM's types). Marks each visible
@@ -73,6 +73,7 @@ const collectControls = `(() => {
       inlineInText,
       disabled: el.getAttribute('aria-disabled') === 'true' || el.disabled === true,
       linkWithoutAddress: role === 'link' && !(el.tagName === 'A' && el.getAttribute('href')),
+      stateUnsaid: ['radio', 'checkbox', 'switch'].includes(role) && !['true', 'false', 'mixed'].includes(el.getAttribute('aria-checked') ?? ''),
     });
     idx++;
   }
@@ -162,6 +163,7 @@ async function auditControls(page: Page, screen: string, problems: string[]): Pr
   if (controls.length === 0) problems.push(`${screen}: no controls found at all`);
   for (const c of controls) {
     if (!c.name) problems.push(`${screen}: ${c.what}: no accessible name`);
+    if (c.stateUnsaid) problems.push(`${screen}: ${c.what}: does not say whether it is checked (no aria-checked)`);
     // react-native-web leaves Enter on a link to the browser, which does nothing without an address.
     if (c.linkWithoutAddress) problems.push(`${screen}: ${c.what}: a link with no address, so Enter does nothing (make it a button or give it an href)`);
     // WCAG 2.5.8's inline exception: a link inside a sentence may be as tall as the line it sits in.
@@ -377,6 +379,9 @@ describe('accessibility of every main screen', () => {
         for (const s of screensOf[role]) {
           await page.goto(`${base}${s.path}`);
           await checkScreen(page, `${roleLabels[role]} ${s.name} (${vp.name})`, vp, problems);
+          // The navigation says which of its destinations this is.
+          const current = await page.locator('[data-testid^="nav-"][aria-current="page"]').evaluateAll((els) => els.map((e) => e.getAttribute('data-testid')));
+          if (current.length !== 1) problems.push(`${roleLabels[role]} ${s.name} (${vp.name}): the navigation marks ${current.length} items as the current page (${current.join(', ')}), not one`);
           // What a screen folds away is checked opened, opened from the keyboard.
           for (const toggle of s.opens ?? []) {
             await page.goto(`${base}${s.path}`);
@@ -398,6 +403,16 @@ describe('accessibility of every main screen', () => {
         const id = await someRequestId(page, deskHolders.includes(role));
         await page.goto(`${base}/requests/${id}`);
         await checkScreen(page, `${roleLabels[role]} request detail page (${vp.name})`, vp, problems);
+        // Each move this desk may make, chosen with Space, shows its own form: checked too.
+        const moves = await page.locator('[role="radio"][data-testid^="action-"]').evaluateAll((els) => els.map((e) => e.getAttribute('data-testid') ?? ''));
+        for (const move of moves) {
+          await page.goto(`${base}/requests/${id}`);
+          await settled(page);
+          await page.getByTestId(move).focus();
+          await page.keyboard.press('Space');
+          await expect.poll(() => page.getByTestId(move).getAttribute('aria-checked')).toBe('true');
+          await checkScreen(page, `${roleLabels[role]} request detail, move [${move}] chosen (${vp.name})`, vp, problems);
+        }
         if (role === 'auditor') {
           await page.goto(`${base}/trail/${id}`);
           await checkScreen(page, `${roleLabels[role]} request trail (${vp.name})`, vp, problems);
@@ -430,6 +445,48 @@ describe('accessibility of every main screen', () => {
       report(problems, w.errors);
       await context.close();
     }, 300_000);
+
+    // Each kind of request, driven by keyboard to its own departure step; each step checked as it
+    // first shows and again after Next refused it, with the errors in place.
+    it(`Contractor: the new request's steps for every kind (${vp.name} ${vp.width}×${vp.height})`, async () => {
+      const problems: string[] = [];
+      const errors: string[] = [];
+      for (const type of ['deck_placement_change', 'construction_joint_relocation', 'joint_seal_substitution', 'other_deviation']) {
+        // A context of its own, so no draft kept on the device from the last kind is offered.
+        const context = await browser.newContext({ viewport: { width: vp.width, height: vp.height } });
+        const page = await context.newPage();
+        const w = watch(page);
+        await signInByKeyboard(page, 'contractor', [], vp);
+        await page.goto(`${base}/requests/new`);
+        await settled(page);
+        await page.getByTestId(`filing-type-${type}`).focus();
+        await page.keyboard.press('Space');
+        await expect.poll(() => page.getByTestId(`filing-type-${type}`).getAttribute('aria-checked')).toBe('true');
+        const next = async (expected: string | null) => {
+          await tabTo(page, 'filing-next');
+          await page.keyboard.press('Enter');
+          if (expected) await expect.poll(() => page.getByTestId('filing-step').textContent(), { timeout: 10_000 }).toBe(expected);
+          else await expect.poll(() => page.locator('[role="alert"]').count(), { timeout: 10_000 }).toBeGreaterThan(0);
+        };
+        const at = (step: string) => `Contractor New request, ${type}, ${step} (${vp.name})`;
+        await next('Step 2 of 5: What and where');
+        if (type === 'deck_placement_change') {
+          await checkScreen(page, at('what and where'), vp, problems);
+          await next(null);
+          await checkScreen(page, at('what and where, refused'), vp, problems);
+        }
+        for (const [id, value] of Object.entries({ 'filing-title': 'Accessibility walk', 'filing-location': 'Pier 2, north fascia', 'filing-span': '2', 'filing-station': '12+40', 'filing-plan-sheets': 'S-12' })) {
+          await page.getByTestId(id).fill(value);
+        }
+        await next('Step 3 of 5: The departure');
+        await checkScreen(page, at('the departure'), vp, problems);
+        await next(null);
+        await checkScreen(page, at('the departure, refused'), vp, problems);
+        errors.push(...w.errors);
+        await context.close();
+      }
+      report(problems, errors);
+    }, 600_000);
 
     for (const role of ['field_inspector', 'section_engineer'] as const) {
       it(`${roleLabels[role]}: the conditions screen (${vp.name} ${vp.width}×${vp.height})`, async () => {
