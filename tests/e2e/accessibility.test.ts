@@ -57,7 +57,8 @@ const collectControls = `(() => {
     const cs = getComputedStyle(el);
     if (r.width === 0 || r.height === 0 || cs.visibility === 'hidden' || el.closest('[aria-hidden="true"]')) continue;
     el.setAttribute('data-a11y-idx', String(idx));
-    const role = el.getAttribute('role') ?? el.tagName.toLowerCase();
+    const implicit = { A: 'link', BUTTON: 'button', TEXTAREA: 'textbox', SELECT: 'combobox', INPUT: 'textbox' };
+    const role = el.getAttribute('role') ?? implicit[el.tagName] ?? el.tagName.toLowerCase();
     const testId = el.getAttribute('data-testid');
     const name = nameOf(el);
     // A link that is one phrase of a sentence: its parent holds more words than the link does.
@@ -347,6 +348,29 @@ describe('accessibility of every main screen', () => {
   });
   afterAll(async () => {
     await browser?.close();
+  });
+
+  // The checks themselves, on a page made to break each rule once: a test that cannot fail is no test.
+  it('catches a nameless small control, a link with no address, an unsaid state and a missing focus ring', async () => {
+    const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+    await page.setContent(`<body style="background:#F3F1EC">
+      <div role="button" tabindex="0" data-testid="tiny" style="width:20px;height:20px"></div>
+      <div role="link" tabindex="0" data-testid="no-address" style="height:48px">Open it</div>
+      <div role="radio" tabindex="0" data-testid="unsaid" style="height:48px">Pick me</div>
+      <p>Read <a href="#terms" data-testid="inline">the terms</a> first.</p>
+    </body>`);
+    const problems: string[] = [];
+    const controls = await auditControls(page, 'made-up', problems);
+    await tabWalk(page, 'made-up', controls, viewports[0], problems);
+    const said = problems.join('\n');
+    expect(said).toContain('[tiny]: no accessible name');
+    expect(said).toContain('[tiny]: target 20×20 px, under 44×44');
+    expect(said).toContain('[no-address] "Open it": a link with no address');
+    expect(said).toContain('[unsaid] "Pick me": does not say whether it is checked');
+    expect(said).toMatch(/\[tiny\].*: no focus ring/);
+    // WCAG 2.5.8's inline exception: the link inside the sentence is not held to 44 px.
+    expect(said).not.toContain('[inline] "the terms": target');
+    await page.close();
   });
 
   for (const vp of viewports) {
