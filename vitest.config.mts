@@ -15,7 +15,8 @@ export default defineConfig({
       {
         test: {
           name: 'api',
-          include: ['tests/api/**/*.test.ts'],
+          // The reliability suite attacks the same real app and services, so it shares their setup.
+          include: ['tests/api/**/*.test.ts', 'tests/reliability/**/*.test.ts'],
           environment: 'node',
           globalSetup: ['tests/api/globalSetup.ts'],
           testTimeout: 30_000,
