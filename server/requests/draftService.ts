@@ -9,6 +9,7 @@ import type { Actor } from '../../shared/requests/types';
 import { HttpError } from '../http/errors';
 import { isProjectMember } from '../projects/projectRepository';
 import { appendTrailEvent } from '../trail/trailChain';
+import { mayRead } from './access';
 import { lockRequest, projectById, takeRequestNumber } from './requestRepository';
 
 const editableStates = ['drafting', 'revising'];
@@ -45,11 +46,14 @@ export async function createDraft(db: Database, actor: Actor, draft: RequestDraf
 export async function updateDraft(db: Database, actor: Actor, requestId: string, version: number, draft: RequestDraft): Promise<void> {
   await db.transaction(async (tx) => {
     const locked = await lockRequest(tx, requestId);
-    if (!locked || !(await isProjectMember(tx, locked.request.projectId, actor.id))) {
+    // An auditor sees every request, so for them it exists: refused (403), not hidden (404).
+    if (!locked || !(await mayRead(tx, actor, locked.request.projectId))) {
       throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
     }
     const r = locked.request;
-    if (actor.role !== 'contractor') throw new HttpError(403, 'not_contractor', 'Only the contractor edits the request.');
+    if (actor.role !== 'contractor' || !(await isProjectMember(tx, r.projectId, actor.id))) {
+      throw new HttpError(403, 'not_contractor', 'Only the contractor edits the request.');
+    }
     if (!editableStates.includes(r.state)) {
       throw new HttpError(409, 'not_editable', 'The request is with a reviewer; it can be edited again only if it is returned for revision.');
     }
