@@ -7,7 +7,8 @@ import { mkdirSync, readdirSync, readFileSync, writeFileSync, rmSync } from 'nod
 import { join } from 'node:path';
 import { randomUUID } from 'node:crypto';
 
-export type CaughtMail = { id: string; from: string; to: string[]; subject: string; text: string; sentAt: string };
+// messageId is the sender's Message-ID header, by which a repeat of one message is recognised.
+export type CaughtMail = { id: string; messageId: string; from: string; to: string[]; subject: string; text: string; sentAt: string };
 
 export type SmtpCatcher = { smtpPort: number; httpUrl: string; close: () => Promise<void> };
 
@@ -31,12 +32,16 @@ export async function startSmtpCatcher(opts: { smtpPort: number; httpPort: numbe
     authOptional: true,
     disabledCommands: ['STARTTLS'],
     logger: false,
+    // Stopping drops open connections within half a second, as a mail server that goes down would,
+    // instead of letting a sender's pooled connection deliver for another 30 s.
+    closeTimeout: 500,
     onData(stream, session, callback) {
       simpleParser(stream)
         .then((parsed) => {
           const envelopeTo = session.envelope.rcptTo.map((r) => r.address);
           const mail: CaughtMail = {
             id: randomUUID(),
+            messageId: parsed.messageId ?? '',
             from: addresses(parsed.from)[0] ?? (session.envelope.mailFrom || { address: '' }).address,
             to: envelopeTo.length ? envelopeTo : addresses(parsed.to),
             subject: parsed.subject ?? '',
