@@ -1,0 +1,137 @@
+// PostgreSQL restarted (fast: sessions cut off) while people move and read requests. Requests in
+// flight fail in our error shape, never hang; health says the database is down and then up; the
+// server reconnects by itself; and no move is half applied or lost once it was answered 200.
+import { asc, eq, inArray } from 'drizzle-orm';
+import { setTimeout as sleep } from 'node:timers/promises';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { changeRequests, trailEvents } from '../../db/schema';
+import { buildTestApp, createScenario, type TestApp } from '../support/apiHarness';
+import { faultTally } from '../support/faultTally';
+import { startPrivateCluster, type PrivateCluster } from '../support/privateCluster';
+import { agentsFor, otherDeviationBody } from '../support/requestFixtures';
+
+const tally = faultTally('fault: postgres restart');
+// Moves that do not count towards the version (the request's own creation, comments).
+const notMoves = new Set(['created', 'commented']);
+
+describe('a database restart under load', () => {
+  let cluster: PrivateCluster | undefined;
+  let t: TestApp;
+  let s: Awaited<ReturnType<typeof createScenario>>;
+  let a: Awaited<ReturnType<typeof agentsFor>>;
+  beforeAll(async () => {
+    cluster = await startPrivateCluster();
+    const url = await cluster.migratedDatabase('spanrelay_faults_restart');
+    t = buildTestApp({ DATABASE_URL: url });
+    s = await createScenario(t.db);
+    a = await agentsFor(t, s);
+  }, 120_000);
+  afterAll(async () => {
+    tally.record('pg_ctl stop -m fast and start while 6 desks move and read');
+    try {
+      // A pool that cannot end (a client never given back) must not keep the cluster running.
+      await Promise.race([t?.close(), sleep(10_000).then(() => Promise.reject(new Error('the app did not close within 10 s')))]);
+    } finally {
+      await cluster?.destroy();
+    }
+  });
+
+  it('fails requests in flight cleanly, reconnects, and leaves no move half applied', () =>
+    tally.attempt(async () => {
+      const ids: string[] = [];
+      for (let i = 0; i < 6; i++) ids.push((await a.contractor.post('/api/requests').send(otherDeviationBody(s.project.id, `Restart ${i}`))).body.id);
+
+      // The next move for each state on a loop that never ends: the question and its answer repeat.
+      const nextMove: Record<string, [keyof typeof a, Record<string, unknown>]> = {
+        drafting: ['contractor', { type: 'submit' }],
+        section_review: ['section_engineer', { type: 'forward' }],
+        central_routing: ['central_office', { type: 'route', eorUserId: s.members.engineer_of_record.id }],
+        eor_review: ['engineer_of_record', { type: 'request_information', comment: 'Which pump, which reach?' }],
+        information_requested: ['contractor', { type: 'provide_information', comment: 'Two 47 m booms.' }],
+      };
+      const answers: { phase: string; status: number; code?: string; hung?: boolean }[] = [];
+      const answered: { id: string; version: number }[] = [];
+      let phase = 'before';
+      let stop = false;
+      const note = (status: number, body: { error?: { code?: string } } | undefined) => answers.push({ phase, status, code: body?.error?.code });
+
+      const desk = async (id: string) => {
+        for (let round = 0; round < 400 && !stop; round++) {
+          try {
+            const read = await a.auditor.get(`/api/requests/${id}`).timeout(15_000);
+            note(read.status, read.body);
+            if (read.status !== 200) {
+              await sleep(100);
+              continue;
+            }
+            const [who, event] = nextMove[read.body.state as string]!;
+            const moved = await a[who].post(`/api/requests/${id}/events`).send({ version: read.body.version, ...event }).timeout(15_000);
+            note(moved.status, moved.body);
+            if (moved.status === 200) answered.push({ id, version: moved.body.version });
+          } catch (err) {
+            // A timeout or a socket that never answered: exactly what must not happen.
+            answers.push({ phase, status: 0, hung: true, code: String(err) });
+          }
+        }
+      };
+      const health: string[] = [];
+      const watchHealth = async () => {
+        while (!stop) {
+          const res = await a.auditor.get('/api/health').timeout(15_000).catch(() => null);
+          const db = res?.body?.db ?? 'no answer';
+          if (health.at(-1) !== db) health.push(db);
+          await sleep(100);
+        }
+      };
+
+      const running = [...ids.map(desk), watchHealth()];
+      await sleep(1500);
+      phase = 'restart';
+      await cluster!.restart();
+      phase = 'after';
+      // Wait for moves to go through again after the restart, within bounds.
+      const deadline = Date.now() + 30_000;
+      while (Date.now() < deadline && answers.filter((x) => x.phase === 'after' && x.status === 200).length < 30) await sleep(200);
+      await sleep(300);
+      stop = true;
+      await Promise.all(running);
+
+      const refused = answers.filter((x) => x.status !== 200);
+      const unclean = answers.filter((x) => !(x.status === 200 || x.status === 409 || (x.status >= 500 && x.code)));
+      console.log(`[faults] database restart: ${answers.length} answers, ${refused.length} refused`, JSON.stringify(tallyOf(refused)), 'health', health.join(' > '));
+      expect(unclean, 'every answer is a success, a stale 409, or a 5xx in our error shape').toEqual([]);
+      expect(answers.filter((x) => x.phase === 'before' && x.status === 200).length).toBeGreaterThan(0);
+      expect(answers.filter((x) => x.phase === 'after' && x.status === 200).length, 'moves go through again after the restart').toBeGreaterThanOrEqual(30);
+      expect(health[0]).toBe('up');
+      expect(health).toContain('down');
+      expect(health.at(-1)).toBe('up');
+      // Every connection a failed request took is back in the pool (or dropped): a leaked one would
+      // shrink the pool for good and the server would never fully recover.
+      expect(t.pool.totalCount - t.pool.idleCount, 'database connections still checked out').toBe(0);
+
+      // Nothing half applied: the state is the last event's, the version counts the moves, and
+      // every move answered 200 is on the trail.
+      const rows = await t.db.select().from(changeRequests).where(inArray(changeRequests.id, ids));
+      const events = await t.db.select().from(trailEvents).where(inArray(trailEvents.requestId, ids)).orderBy(asc(trailEvents.seq));
+      let lost = 0;
+      for (const row of rows) {
+        const mine = events.filter((e) => e.requestId === row.id);
+        const moves = mine.filter((e) => !notMoves.has(e.eventType)).length;
+        expect(row.state, row.id).toBe(mine.at(-1)!.stateAfter);
+        expect(row.version, row.id).toBe(1 + moves);
+        const highestAnswered = Math.max(1, ...answered.filter((x) => x.id === row.id).map((x) => x.version));
+        if (highestAnswered > row.version) lost += highestAnswered - row.version;
+        expect((await a.auditor.get(`/api/requests/${row.id}/trail/verify`)).body).toMatchObject({ ok: true, events: mine.length });
+      }
+      tally.lose(lost);
+      expect(lost).toBe(0);
+      const [first] = await t.db.select().from(changeRequests).where(eq(changeRequests.id, ids[0]!));
+      expect(first!.version).toBeGreaterThan(1);
+    }), 120_000);
+});
+
+function tallyOf(list: { status: number; code?: string }[]) {
+  const out: Record<string, number> = {};
+  for (const x of list) out[`${x.status} ${x.code ?? ''}`.trim()] = (out[`${x.status} ${x.code ?? ''}`.trim()] ?? 0) + 1;
+  return out;
+}
