@@ -15,6 +15,11 @@ export const acceptedFileTypes: Record<string, string> = {
   'application/x-cfb': 'Office document (97–2003)',
 };
 
+// Names a computer would run or render rather than open as a document: refused whatever the bytes
+// are, since the file is saved under its own name ("drawing.pdf.exe") when someone downloads it.
+const runnableEndings = /\.(exe|com|bat|cmd|msi|scr|pif|cpl|dll|jar|js|mjs|vbs|vbe|wsf|wsh|hta|ps1|psm1|sh|bash|app|lnk|reg|html?|xhtml|svgz?|xml|php|asp|aspx|jsp)$/i;
+export const refusedByName = (fileName: string) => runnableEndings.test(fileName.trim().replace(/[.\s]+$/, ''));
+
 export const acceptedTypesInWords = 'PDF, PNG, JPEG, HEIC or WebP photos, and Word, Excel, PowerPoint or OpenDocument files';
 
 // Images a preview can be made of (HEIC needs a codec the server does not carry).

@@ -9,7 +9,7 @@ import type { StorageEngine } from 'multer';
 import { fileTypeFromBuffer } from 'file-type';
 import { HttpError } from '../http/errors';
 import type { ObjectStore } from './objectStore';
-import { acceptedFileTypes, acceptedTypesInWords } from './acceptedFileTypes';
+import { acceptedFileTypes, acceptedTypesInWords, refusedByName } from './acceptedFileTypes';
 
 export type UploadTarget = {
   keyFor: () => string;
@@ -58,7 +58,12 @@ function readHead(stream: Readable): Promise<{ head: Buffer; body: Readable }> {
 async function storeOne(store: ObjectStore, target: UploadTarget, file: Express.Multer.File): Promise<StoredUpload> {
   const { head, body } = await readHead(file.stream);
   if (head.length === 0) throw new HttpError(400, 'empty_file', `"${file.originalname}" is empty.`);
-  const sniffed = await fileTypeFromBuffer(head);
+  if (refusedByName(file.originalname)) {
+    body.resume();
+    throw new HttpError(415, 'unsupported_type', `"${file.originalname}" is named like a program or a web page; rename it to what it is (for example .pdf) and send it again.`);
+  }
+  // A broken container (a ZIP whose entries lie) makes the sniffer throw: that is a file we do not take.
+  const sniffed = await fileTypeFromBuffer(head).catch(() => undefined);
   if (!sniffed || !(sniffed.mime in acceptedFileTypes)) {
     body.resume();
     throw new HttpError(415, 'unsupported_type', `"${file.originalname}" is not a file Spanrelay accepts. Send ${acceptedTypesInWords}.`);
