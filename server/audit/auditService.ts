@@ -21,7 +21,9 @@ function decodeCursor(cursor: string): { lastEventAt: Date; id: string } {
   try {
     const [at, id] = JSON.parse(Buffer.from(cursor, 'base64url').toString('utf8')) as [unknown, unknown];
     const lastEventAt = new Date(String(at));
-    if (typeof at !== 'string' || Number.isNaN(lastEventAt.getTime()) || typeof id !== 'string' || !/^[0-9a-f-]{36}$/i.test(id)) throw new Error('bad cursor');
+    // Years PostgreSQL's timestamptz cannot hold are as foreign as any other made-up cursor.
+    const year = lastEventAt.getUTCFullYear();
+    if (typeof at !== 'string' || Number.isNaN(lastEventAt.getTime()) || year < 1 || year > 9999 || typeof id !== 'string' || !/^[0-9a-f-]{36}$/i.test(id)) throw new Error('bad cursor');
     return { lastEventAt, id };
   } catch {
     throw new HttpError(400, 'bad_cursor', 'That page cursor is not one this server gave out; search again.');

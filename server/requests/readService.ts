@@ -36,7 +36,7 @@ function decodeCursor(cursor: string): { key: string; id: string } {
   try {
     const [key, id] = JSON.parse(Buffer.from(cursor, 'base64url').toString('utf8')) as [unknown, unknown];
     // Every sort key is a time (or 'infinity' for no due date).
-    if (typeof key !== 'string' || (key !== 'infinity' && Number.isNaN(new Date(key).getTime())) || typeof id !== 'string' || !uuid.safeParse(id).success) {
+    if (typeof key !== 'string' || (key !== 'infinity' && !isDatabaseTime(key)) || typeof id !== 'string' || !uuid.safeParse(id).success) {
       throw new Error('bad cursor');
     }
     return { key, id };
@@ -46,6 +46,18 @@ function decodeCursor(cursor: string): { key: string; id: string } {
 }
 
 const uuid = z.uuid();
+
+// A time as PostgreSQL writes timestamptz as text ("2026-12-02 12:05:59.123456+00"), with a day that
+// exists: JavaScript reads far more ("1", "2027") than PostgreSQL will, so the shape is checked here.
+const databaseTime = /^(\d{4})-(\d{2})-(\d{2}) ([01]\d|2[0-3]):[0-5]\d:[0-5]\d(\.\d{1,6})?[+-]\d{2}(:\d{2}){0,2}$/;
+function isDatabaseTime(key: string): boolean {
+  const m = databaseTime.exec(key);
+  if (!m) return false;
+  const [year, month, day] = [Number(m[1]), Number(m[2]), Number(m[3])];
+  const date = new Date(0);
+  date.setUTCFullYear(year, month - 1, day);
+  return year >= 1 && date.getUTCFullYear() === year && date.getUTCMonth() === month - 1 && date.getUTCDate() === day;
+}
 
 // The filters as the repository takes them, narrowed to what this reader may see.
 async function filterFor(db: Database, actor: Actor, q: RequestFilterQuery): Promise<RequestFilter> {
