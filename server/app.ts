@@ -13,6 +13,7 @@ import { conditionRoutes } from './conditions/conditionRoutes';
 import { devMailRoutes } from './dev/devMailRoutes';
 import { healthRoutes } from './health/healthRoutes';
 import { errorHandler, HttpError } from './http/errors';
+import { refuseNulCharacters } from './http/nulCharacters';
 import { sameOriginWrites, securityHeaders } from './http/security';
 import type { Mailer } from './mail/mailer';
 import { projectRoutes } from './projects/projectRoutes';
@@ -42,6 +43,7 @@ export function createApp(parts: AppParts) {
     next();
   }, toNodeHandler(auth));
   app.use(express.json({ limit: '256kb' }));
+  app.use('/api', refuseNulCharacters);
 
   app.use(healthRoutes({ db, store, mailer }));
   if (env.NODE_ENV !== 'production' && env.MAIL_CATCHER_URL) app.use(devMailRoutes(env.MAIL_CATCHER_URL));
