@@ -42,6 +42,8 @@ export function requestRoutes(deps: { db: Database; store: ObjectStore; publicUr
   const router = Router();
   const upload = multer({
     storage: streamingUploadStorage(store),
+    // Browsers send a file's name as raw UTF-8; read as Latin-1 (the default) "сечение" came back garbled.
+    defParamCharset: 'utf8',
     limits: { fileSize: deps.maxFileBytes ?? uploadLimits.maxFileBytes, files: uploadLimits.maxFilesPerRequest, fields: 5, fieldSize: 1024 },
   });
 
