@@ -37,6 +37,10 @@ const multerMessages: Record<string, [number, string]> = {
   LIMIT_UNEXPECTED_FILE: [400, 'Files must be sent in the "files" field.'],
 };
 
+// What the multipart parser (busboy, under multer) says of an upload body it cannot read: the
+// sender's fault, so a 400, not ours.
+const unreadableUpload = /^(Malformed part header|Malformed content type|Malformed urlencoded form|Unexpected end of (form|file)|Multipart: Boundary not found|Missing Content-Type|Unsupported content type)/;
+
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (res.headersSent) return;
   if (err instanceof HttpError) {
@@ -54,6 +58,10 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   }
   if (err && typeof err === 'object' && 'type' in err && err.type === 'entity.too.large') {
     res.status(413).json({ error: { code: 'body_too_large', message: 'The request body is too large.' } });
+    return;
+  }
+  if (err instanceof Error && !(err as { type?: unknown }).type && unreadableUpload.test(err.message)) {
+    res.status(400).json({ error: { code: 'malformed_upload', message: 'The upload could not be read; send the files again as multipart/form-data.' } });
     return;
   }
   console.error('[spanrelay] unexpected error', err);
