@@ -404,7 +404,7 @@ describe('accessibility of every main screen', () => {
           await page.goto(`${base}${s.path}`);
           await checkScreen(page, `${roleLabels[role]} ${s.name} (${vp.name})`, vp, problems);
           // The navigation says which of its destinations this is.
-          const current = await page.locator('[data-testid^="nav-"][aria-current="page"]').evaluateAll((els) => els.map((e) => e.getAttribute('data-testid')));
+          const current = await page.evaluate<string[]>(`Array.from(document.querySelectorAll('[data-testid^="nav-"][aria-current="page"]')).map((e) => e.getAttribute('data-testid'))`);
           if (current.length !== 1) problems.push(`${roleLabels[role]} ${s.name} (${vp.name}): the navigation marks ${current.length} items as the current page (${current.join(', ')}), not one`);
           // What a screen folds away is checked opened, opened from the keyboard.
           for (const toggle of s.opens ?? []) {
@@ -428,7 +428,7 @@ describe('accessibility of every main screen', () => {
         await page.goto(`${base}/requests/${id}`);
         await checkScreen(page, `${roleLabels[role]} request detail page (${vp.name})`, vp, problems);
         // Each move this desk may make, chosen with Space, shows its own form: checked too.
-        const moves = await page.locator('[role="radio"][data-testid^="action-"]').evaluateAll((els) => els.map((e) => e.getAttribute('data-testid') ?? ''));
+        const moves = await page.evaluate<string[]>(`Array.from(document.querySelectorAll('[role="radio"][data-testid^="action-"]')).map((e) => e.getAttribute('data-testid'))`);
         for (const move of moves) {
           await page.goto(`${base}/requests/${id}`);
           await settled(page);
