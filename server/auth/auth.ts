@@ -2,7 +2,7 @@
 // public sign-up is off; `role` is stored on the user and can never be set by the user.
 import { betterAuth } from 'better-auth';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
-import { APIError, createAuthMiddleware } from 'better-auth/api';
+import { APIError, createAuthMiddleware, getSessionFromCtx } from 'better-auth/api';
 import { createSignInThrottle } from './signInThrottle';
 import type { Database } from '../../db/client';
 import * as schema from '../../db/schema';
@@ -74,6 +74,7 @@ export function createAuth(db: Database, env: ServerEnv, mailer: Mailer = oneOff
     hooks: {
       before: createAuthMiddleware(async (ctx) => {
         if (ctx.path === '/reset-password') return refuseWeakReset(ctx);
+        if (ctx.path === '/update-user') return refuseSelfProfileChange(ctx);
         if (ctx.path !== '/sign-in/email') return;
         const { email, address } = signInKeys(ctx);
         const waitMs = throttle.retryAfterMs(email, address);
@@ -101,6 +102,14 @@ async function refuseWeakReset(ctx: Parameters<Parameters<typeof createAuthMiddl
   const user = await ctx.context.internalAdapter.findUserById(verification.value);
   const problem = user ? passwordProblem(body.newPassword, user.email) : null;
   if (problem) throw new APIError('BAD_REQUEST', { message: problem, code: 'WEAK_PASSWORD' });
+}
+
+// A person's name is what the trail shows beside every move they made, so nobody renames
+// themself: the name is chosen once, on accepting the invitation. Signed out stays a 401.
+async function refuseSelfProfileChange(ctx: Parameters<Parameters<typeof createAuthMiddleware>[0]>[0]) {
+  const session = await getSessionFromCtx(ctx);
+  if (!session) throw new APIError('UNAUTHORIZED', { message: 'Sign in to continue.' });
+  throw new APIError('FORBIDDEN', { message: 'Your name and role are kept by an administrator; ask one to change them.', code: 'PROFILE_LOCKED' });
 }
 
 export type Auth = ReturnType<typeof createAuth>;
