@@ -163,8 +163,11 @@ describe('the access matrix of every route', () => {
       } },
     { name: 'public sign-up is off', route: 'ALL /api/auth/*splat', out: 400, member: [400, 400, 400, 400, 400, 400, 400], outsider: [400, 400, 400, 400, 400, 400, 400],
       call: (c) => c.agent.post('/api/auth/sign-up/email').set('origin', origin()).send({ email: `walk-in-${randomUUID().slice(0, 6)}@test.spanrelay.test`, password: 'Walk-in-password-55', name: 'Walk In' }) },
-    { name: 'raising one’s own role through better-auth', route: 'ALL /api/auth/*splat', out: 401, member: [400, 400, 400, 400, 400, 400, 400], outsider: [400, 400, 400, 400, 400, 400, 400],
+    // The trail shows each mover's name, so nobody edits their own name, role or picture.
+    { name: 'raising one’s own role through better-auth', route: 'ALL /api/auth/*splat', out: 401, member: [403, 403, 403, 403, 403, 403, 403], outsider: [403, 403, 403, 403, 403, 403, 403],
       call: send('post', '/api/auth/update-user', () => ({ role: 'admin' })) },
+    { name: 'renaming oneself through better-auth', route: 'ALL /api/auth/*splat', out: 401, member: [403, 403, 403, 403, 403, 403, 403], outsider: [403, 403, 403, 403, 403, 403, 403],
+      call: send('post', '/api/auth/update-user', () => ({ name: 'Chief Engineer' })) },
 
     { name: 'who am I', route: 'GET /api/me', out: 401, member: everyone200, outsider: everyone200, call: get('/api/me') },
     { name: 'my projects', route: 'GET /api/projects', out: 401, member: everyone200, outsider: everyone200, call: get('/api/projects'), shows: (res) => res.text.includes(s.project.id) },
@@ -262,13 +265,16 @@ describe('the access matrix of every route', () => {
     expect([...listed].filter((r) => !declared.includes(r)), 'rows for routes the app no longer has').toEqual([]);
   });
 
-  it('never lets a person raise their own role, through better-auth or the administrator’s routes', async () => {
+  it('never lets a person raise their own role or rename themself, through better-auth or the administrator’s routes', async () => {
     for (const c of callers.filter((x) => x.role && x.role !== 'admin')) {
+      const before = (await c.agent.get('/api/me')).body as { name: string };
       await c.agent.post('/api/auth/update-user').set('origin', origin()).send({ role: 'admin' });
+      await c.agent.post('/api/auth/update-user').set('origin', origin()).send({ name: 'Chief Engineer', role: 'admin' });
       await c.agent.patch(`/api/admin/people/${c.person!.id}`).set('origin', origin()).send({ role: 'admin' });
       const me = await c.agent.get('/api/me');
       expect(me.status, c.label).toBe(200);
       expect((me.body as { role: string }).role, c.label).toBe(c.role);
+      expect((me.body as { name: string }).name, c.label).toBe(before.name);
       const session = await c.agent.get('/api/auth/get-session');
       expect((session.body as { user: { role: string } }).user.role, c.label).toBe(c.role);
     }
