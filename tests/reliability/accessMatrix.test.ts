@@ -64,6 +64,8 @@ describe('the access matrix of every route', () => {
   let recordFile: string;
   let closed: string;
   let withConditions: string;
+  let condition: string;
+  let evidence: string;
   let preview: { id: string; token: string };
 
   let cases = 0;
@@ -118,6 +120,8 @@ describe('the access matrix of every route', () => {
     if (submitted.status !== 200) throw new Error(`submit answered ${submitted.status}: ${submitted.text}`);
     closed = (await requestAt(t, s, a, 'closed')).id;
     withConditions = (await requestAt(t, s, a, 'conditions_open')).id;
+    condition = ((await a.field_inspector.get(`/api/requests/${withConditions}`)).body as { conditions: { id: string }[] }).conditions[0]!.id;
+    evidence = ((await upload(a.field_inspector, withConditions, 'standby-pump.jpg', await samplePhoto(), 'condition_evidence')).body as { id: string }[])[0]!.id;
     preview = await openInvitation();
   });
 
@@ -222,12 +226,16 @@ describe('the access matrix of every route', () => {
       call: (c) => send('put', `/api/requests/${review}/draft`, async () => ({ version: await versionOf(review), body: otherDeviationBody(s.project.id) }))(c) },
     { name: 'forward from section review', route: 'POST /api/requests/:id/events', out: 401, member: [403, 200, 403, 403, 403, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: (c) => send('post', `/api/requests/${moving}/events`, async () => ({ version: await versionOf(moving), type: 'forward' }))(c) },
+    { name: 'meet a condition on site', route: 'POST /api/requests/:id/events', out: 401, member: [403, 403, 403, 403, 200, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
+      call: (c) => send('post', `/api/requests/${withConditions}/events`, async () => ({ version: await versionOf(withConditions), type: 'satisfy_condition', conditionId: condition, evidenceAttachmentId: evidence, comment: 'Standby pump seen on site.' }))(c) },
     { name: 'withdraw a closed request', route: 'POST /api/requests/:id/events', out: 401, member: [409, 409, 409, 409, 409, 409, 409], outsider: [404, 404, 404, 404, 404, 409, 404],
       call: (c) => send('post', `/api/requests/${closed}/events`, async () => ({ version: await versionOf(closed), type: 'withdraw' }))(c) },
     { name: 'comment', route: 'POST /api/requests/:id/comments', out: 401, member: [201, 201, 201, 201, 201, 403, 201], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: (c) => send('post', `/api/requests/${review}/comments`, () => ({ comment: `Checked by ${c.label}.` }))(c) },
     { name: 'add a drawing to a draft', route: 'POST /api/requests/:id/attachments', out: 401, member: [201, 403, 403, 403, 403, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: async (c) => upload(c.agent, draft, 'scupper.jpg', await samplePhoto(24, 24)) },
+    { name: 'add evidence while conditions are open', route: 'POST /api/requests/:id/attachments', out: 401, member: [403, 403, 403, 403, 201, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
+      call: async (c) => upload(c.agent, withConditions, 'trial-batch.jpg', await samplePhoto(24, 24), 'condition_evidence') },
     { name: 'add a drawing under review', route: 'POST /api/requests/:id/attachments', out: 401, member: [409, 403, 403, 403, 403, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: async (c) => upload(c.agent, review, 'late.jpg', await samplePhoto(24, 24)) },
     { name: 'remove a draft’s file', route: 'DELETE /api/requests/:id/attachments/:attachmentId', out: 401, member: [204, 403, 403, 403, 403, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
