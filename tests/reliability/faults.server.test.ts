@@ -77,7 +77,7 @@ describe('the server killed during 200 concurrent moves', () => {
       }
 
       let answered = 0;
-      const outcomes: Promise<Outcome>[] = ids.map(async (id) => {
+      const outcomes: Promise<Outcome>[] = ids.map(async (id): Promise<Outcome> => {
         try {
           const res = await call(contractor, 'POST', `/api/requests/${id}/events`, { type: 'submit', version: 1 });
           answered += 1;
