@@ -23,8 +23,8 @@ type Caller = { label: string; agent: Agent; person: Person | null; role: Role |
 type Answer = { status: number; body: unknown; text: string };
 type RouterLayer = { rawPath?: unknown; route?: { path: string; methods: Record<string, boolean> }; handle?: { stack?: RouterLayer[] } };
 
-// Statuses in the order of `roles`: contractor, section engineer, central office, engineer of
-// record, field inspector, auditor, administrator.
+// The table's columns, in this file's own order (not the product's list of roles).
+const columns: readonly Role[] = ['contractor', 'section_engineer', 'central_office', 'engineer_of_record', 'field_inspector', 'auditor', 'admin'];
 type PerRole = readonly [number, number, number, number, number, number, number];
 type Row = {
   name: string;
@@ -266,6 +266,7 @@ describe('the access matrix of every route', () => {
   }
 
   it('has a row for every route the app declares, and none for a route that is gone', () => {
+    expect([...columns].sort(), 'a role without a column in the table').toEqual([...roles].sort());
     const declared = declaredRoutes();
     expect(declared.length).toBeGreaterThan(30);
     const listed = new Set(rows().map((r) => r.route));
@@ -319,7 +320,7 @@ describe('the access matrix of every route', () => {
 
   function expected(row: Row, c: Caller): number {
     if (!c.role) return row.out;
-    return (c.member ? row.member : row.outsider)[roles.indexOf(c.role)]!;
+    return (c.member ? row.member : row.outsider)[columns.indexOf(c.role)]!;
   }
 
   const ok = (status: number) => status >= 200 && status < 300;
