@@ -10,18 +10,13 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { attachments } from '../../db/schema';
 import { startS3Fake, type S3Fake } from '../../docker-free-scripts/fakes/s3Fake';
 import { buildTestApp, createScenario, s3ClientFor, signIn, waitForMail, type TestApp } from '../support/apiHarness';
+import { binary, pdfText } from '../support/documents';
 import { agentsFor, otherDeviationBody, requestAt } from '../support/requestFixtures';
 import { pdfOfSize, samplePdf, samplePhoto, samplePng } from '../support/sampleFiles';
 import { fakesDir, testBucket } from '../support/testSettings';
 import { privateDatabase } from '../support/privateDatabase';
 
 const sha256 = (b: Buffer) => createHash('sha256').update(b).digest('hex');
-const binary = (res: unknown, cb: (err: Error | null, body: unknown) => void) => {
-  const r = res as NodeJS.ReadableStream;
-  const chunks: Buffer[] = [];
-  r.on('data', (c: Buffer) => chunks.push(c));
-  r.on('end', () => cb(null, Buffer.concat(chunks)));
-};
 // An ISO base-media header with the 'heic' brand, as phones write it (ISO/IEC 23008-12).
 const heicHeader = Buffer.concat([Buffer.from([0, 0, 0, 0x18]), Buffer.from('ftypheic'), Buffer.from([0, 0, 0, 0]), Buffer.from('mif1heic'), Buffer.alloc(64)]);
 
@@ -202,19 +197,6 @@ describe('attachments', () => {
     expect(mail.some((m) => m.subject === `${detail.number}: decision record ready` && m.text.includes(`/api/attachments/${record.id}/content`))).toBe(true);
   });
 });
-
-async function pdfText(pdf: Buffer): Promise<string> {
-  const { getDocument } = await import('pdfjs-dist/legacy/build/pdf.mjs');
-  const doc = await getDocument({ data: new Uint8Array(pdf), useSystemFonts: false, isEvalSupported: false }).promise;
-  let text = '';
-  for (let i = 1; i <= doc.numPages; i++) {
-    const page = await doc.getPage(i);
-    const content = await page.getTextContent();
-    text += content.items.map((item) => ('str' in item ? item.str : '')).join(' ') + '\n';
-  }
-  // Lines wrap in the PDF; join them so sentences and hashes can be searched whole.
-  return text.replace(/\s+/g, ' ');
-}
 
 describe('an attachment row that cannot be written', () => {
   it('takes its stored object away again, so no file is left without its row', async () => {
