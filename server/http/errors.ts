@@ -41,6 +41,26 @@ const multerMessages: Record<string, [number, string]> = {
 // sender's fault, so a 400, not ours.
 const unreadableUpload = /^(Malformed part header|Malformed content type|Malformed urlencoded form|Unexpected end of (form|file)|Multipart: Boundary not found|Missing Content-Type|Unsupported content type)/;
 
+// A lost or refused database connection (a restart, a failover, a full pool), however deeply the
+// query builder or the auth library wrapped it: the person is told to try again shortly rather
+// than that something is broken. Class 08 is connection exceptions; 57P01-03 are shutdown/start-up.
+const unavailableCodes = new Set(['ECONNREFUSED', 'ECONNRESET', 'EPIPE', '57P01', '57P02', '57P03']);
+const unavailableMessages = /Connection terminated|not queryable|timeout exceeded when trying to connect/;
+
+export function isDatabaseUnavailable(err: unknown): boolean {
+  // Only below a failed query (or a PostgreSQL message itself), so the store or the mail server
+  // refusing a connection is never reported as the database.
+  let viaDatabase = false;
+  for (let e = err, depth = 0; e && typeof e === 'object' && depth < 6; e = (e as { cause?: unknown }).cause, depth++) {
+    viaDatabase ||= e.constructor?.name === 'DrizzleQueryError' || 'severity' in e;
+    if (!viaDatabase) continue;
+    const code = (e as { code?: unknown }).code;
+    if (typeof code === 'string' && (unavailableCodes.has(code) || /^08[0-9A-Z]{3}$/.test(code))) return true;
+    if (e instanceof Error && unavailableMessages.test(e.message)) return true;
+  }
+  return false;
+}
+
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (res.headersSent) return;
   if (err instanceof HttpError) {
@@ -62,6 +82,13 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   }
   if (err instanceof Error && !(err as { type?: unknown }).type && unreadableUpload.test(err.message)) {
     res.status(400).json({ error: { code: 'malformed_upload', message: 'The upload could not be read; send the files again as multipart/form-data.' } });
+    return;
+  }
+  if (isDatabaseUnavailable(err)) {
+    console.error('[spanrelay] database unavailable:', err instanceof Error ? err.message.split('\n')[0] : err);
+    res.status(503).json({
+      error: { code: 'database_unavailable', message: 'The database is not reachable right now. Try again in a moment; if you were saving a change, reload first to see whether it was kept.' },
+    });
     return;
   }
   console.error('[spanrelay] unexpected error', err);
