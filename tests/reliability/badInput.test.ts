@@ -355,6 +355,41 @@ describe('bad input', () => {
     }
     expect(since(start)).toEqual([]);
   }, 240_000);
+  // The account routes are better-auth's own, with its own refusal shape; junk must still never be a 5xx.
+  it('answers junk sent to the account routes without a 5xx', async () => {
+    const start = problems.length;
+    const paths = ['/api/auth/sign-in/email', '/api/auth/request-password-reset', '/api/auth/reset-password'];
+    for (const path of paths) {
+      await fc.assert(
+        fc.asyncProperty(anyBody, async (body) => {
+          tally.cases++;
+          const res = (await request(t.app).post(path).set('origin', t.env.PUBLIC_URL).set('content-type', 'application/json').send(JSON.stringify(body))) as Answer;
+          if (res.status < 500) return true;
+          tally.failures++;
+          problems.push(`${path} <- ${JSON.stringify(body).slice(0, 120)}: answered ${res.status}: ${res.text.slice(0, 200)}`);
+          return false;
+        }),
+        runs(20),
+      );
+    }
+    const fixed: [string, Json][] = [
+      ['/api/auth/sign-in/email', { email: `${s.contractor.email}\u0000`, password: 'x\u0000y' }],
+      ['/api/auth/sign-in/email', { email: s.contractor.email, password: huge }],
+      ['/api/auth/request-password-reset', { email: `nul\u0000@test.spanrelay.test`, redirectTo: '/reset-password' }],
+      ['/api/auth/request-password-reset', { email: s.contractor.email, redirectTo: 'https://elsewhere.example/steal' }],
+      ['/api/auth/reset-password', { token: "'; drop table users; --", newPassword: 'pier cap 27 west' }],
+    ];
+    for (const [path, body] of fixed) {
+      tally.cases++;
+      const res = (await request(t.app).post(path).set('origin', t.env.PUBLIC_URL).send(body as object)) as Answer;
+      if (res.status >= 500) {
+        tally.failures++;
+        problems.push(`${path} <- ${JSON.stringify(body).slice(0, 120)}: answered ${res.status}: ${res.text.slice(0, 200)}`);
+      }
+    }
+    expect(since(start)).toEqual([]);
+  }, 120_000);
+
   it('knows a bad answer when it sees one', () => {
     const json = { 'content-type': 'application/json; charset=utf-8' };
     expect(shapeProblem({ status: 500, text: 'boom', body: {}, headers: json })).toMatch(/500/);
