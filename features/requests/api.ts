@@ -91,9 +91,12 @@ export function useMyProjects() {
 }
 
 // A changed request may move between desks, so every list is stale; the detail we already hold.
-function settle(queryClient: QueryClient, detail: RequestDetail) {
+// A read of the detail still in flight was asked before this answer and would overwrite it with the
+// older state, so it is cancelled first.
+export async function settle(queryClient: QueryClient, detail: RequestDetail) {
+  await queryClient.cancelQueries({ queryKey: requestKeys.detail(detail.id), exact: true });
   queryClient.setQueryData(requestKeys.detail(detail.id), detail);
-  return queryClient.invalidateQueries({ queryKey: requestKeys.lists() });
+  await queryClient.invalidateQueries({ queryKey: requestKeys.lists() });
 }
 
 export function useCreateDraft() {
