@@ -31,5 +31,6 @@ export WEB_DIST="$ROOT/dist"
 npx vitest run --project e2e \
   --reporter=default --reporter=json --outputFile.json="$TEST_ARTIFACTS/vitest-e2e.json" || status=1
 
+node docker-free-scripts/reliability-report.mjs "$TEST_ARTIFACTS"
 TYPECHECK_FAILED="$typecheck_failed" node docker-free-scripts/test-summary.mjs "$TEST_ARTIFACTS/vitest-unit-api.json" "$TEST_ARTIFACTS/vitest-e2e.json" || status=1
 exit "$status"
