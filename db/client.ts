@@ -1,6 +1,6 @@
 // One pg pool per process, wrapped by Drizzle with the full schema.
 import { drizzle, type NodePgDatabase } from 'drizzle-orm/node-postgres';
-import { Pool } from 'pg';
+import { Pool, type PoolClient } from 'pg';
 import * as schema from './schema';
 
 export type Database = NodePgDatabase<typeof schema>;
@@ -11,8 +11,38 @@ export function createDatabase(url: string, max = 10): { db: Database; pool: Poo
   // An idle client losing its connection (a database restart) must not crash the process.
   pool.on('error', (err) => console.error('[spanrelay] database connection lost:', err.message));
   pool.on('connect', (client) => client.on('error', (err) => console.error('[spanrelay] database client error:', err.message)));
+  giveBackBrokenClients(pool);
   const db = drizzle(pool, { schema });
   return { db, pool };
+}
+
+// Drizzle's transaction gives its client back only once BEGIN has succeeded; when the database
+// closed the connection a moment before (a restart), BEGIN fails and the client stays checked out
+// for good, so each restart shrank the pool until no request could get a connection. A client whose
+// connection breaks while checked out goes back to the pool with its error (which drops it), and a
+// second release by its holder is then a no-op.
+function giveBackBrokenClients(pool: Pool): void {
+  const connect = pool.connect.bind(pool) as (callback?: unknown) => Promise<PoolClient> | void;
+  const checkedOut = async (): Promise<PoolClient> => {
+    const client = (await connect()) as PoolClient;
+    const release = client.release;
+    let released = false;
+    const giveBack = (err?: Error | boolean) => {
+      if (released) return;
+      released = true;
+      client.off('error', broken);
+      client.off('end', ended);
+      release(err);
+    };
+    const broken = (err: Error) => giveBack(err);
+    const ended = () => giveBack(new Error('the database closed the connection'));
+    client.on('error', broken);
+    client.on('end', ended);
+    client.release = giveBack;
+    return client;
+  };
+  // The callback form (used by no code of ours) is left as it is.
+  pool.connect = ((callback?: unknown) => (callback ? connect(callback) : checkedOut())) as Pool['connect'];
 }
 
 export { schema };
