@@ -1,7 +1,9 @@
 // PostgreSQL restarted (fast: sessions cut off) while people move and read requests. Requests in
 // flight are answered 503 in our error shape, never hang; health says the database is down, then
 // up; the server reconnects by itself; and no move answered 200 is lost or half applied.
-import { asc, eq, inArray } from 'drizzle-orm';
+import { asc, eq, inArray, sql } from 'drizzle-orm';
+import { Client } from 'pg';
+import { createDatabase } from '../../db/client';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { changeRequests, trailEvents } from '../../db/schema';
@@ -129,6 +131,33 @@ describe('a database restart under load', () => {
       const [first] = await t.db.select().from(changeRequests).where(eq(changeRequests.id, ids[0]!));
       expect(first!.version).toBeGreaterThan(1);
     }), 120_000);
+
+  it('gives back pooled connections the database closed just before a transaction began', () =>
+    tally.attempt(async () => {
+      // Whether the pool notices the closed connection before handing it out is a race, so the
+      // close is tried ten times; each time the pool must end with nothing checked out.
+      let begunOnClosed = 0;
+      for (let round = 0; round < 10; round++) {
+        // One connection, so the transaction is handed the one closed under it.
+        const { db, pool } = createDatabase(t.env.DATABASE_URL, 1);
+        try {
+          const [{ pid } = { pid: 0 }] = (await db.execute<{ pid: number }>(sql`select pg_backend_pid() as pid`)).rows;
+          const admin = new Client({ connectionString: t.env.DATABASE_URL });
+          await admin.connect();
+          await admin.query('select pg_terminate_backend($1)', [pid]);
+          const failed = await db.transaction(async (tx) => void (await tx.execute(sql`select 1`))).then(() => false, () => true);
+          if (failed) begunOnClosed += 1;
+          await admin.end();
+          // And the pool works again at once.
+          expect((await db.execute<{ n: number }>(sql`select 1 as n`)).rows[0]!.n).toBe(1);
+        } finally {
+          const ended = await Promise.race([pool.end().then(() => true), sleep(3000).then(() => false)]);
+          if (!ended) tally.lose(1);
+          expect(ended, 'the pool ends: no connection left checked out').toBe(true);
+        }
+      }
+      console.log(`[faults] transactions begun on a just-closed connection: ${begunOnClosed} of 10`);
+    }));
 });
 
 function tallyOf(list: { status: number; code?: string }[]) {
