@@ -1,28 +1,14 @@
 // Queries and mutations for requests and projects: one key factory, invalidation on success.
-import { useInfiniteQuery, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import type { RequestCounts, RequestFilterQuery, RequestListQuery } from '../../shared/requests/listQuery';
+import { useInfiniteQuery, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { RequestCounts } from '../../shared/requests/listQuery';
 import type { RequestDraft } from '../../shared/requests/requestBody';
 import type { Actor, ProjectSummary, RequestDetail, RequestPage, RequestSummary, TrailEntry } from '../../shared/requests/types';
 import type { WorkflowEventInput } from '../../shared/workflow/events';
 import { ApiError, apiFetch } from '../api/http';
 import { actorKey } from '../auth/useActor';
+import { requestKeys, settle, type PersonOption, type RequestCountFilters, type RequestListFilters, type TrailCheck } from './requestCache';
 
-export type RequestListFilters = Omit<Partial<RequestListQuery>, 'cursor'>;
-export type RequestCountFilters = Partial<RequestFilterQuery>;
-export type PersonOption = { id: string; name: string; email: string; organization: string | null };
-export type TrailCheck = { ok: true; events: number } | { ok: false; brokenAt: number };
-
-export const requestKeys = {
-  all: ['requests'] as const,
-  lists: () => ['requests', 'list'] as const,
-  list: (filters: RequestListFilters) => ['requests', 'list', filters] as const,
-  // Under 'list', so whatever makes the lists stale makes the counts stale too.
-  counts: (filters: RequestCountFilters) => ['requests', 'list', 'counts', filters] as const,
-  detail: (id: string) => ['requests', 'detail', id] as const,
-  engineersOfRecord: (id: string) => ['requests', 'detail', id, 'engineers-of-record'] as const,
-  trailCheck: (id: string) => ['requests', 'detail', id, 'trail-check'] as const,
-  projects: ['projects'] as const,
-};
+export { requestKeys, settle, type PersonOption, type RequestCountFilters, type RequestListFilters, type TrailCheck } from './requestCache';
 
 const requestPath = (id: string) => `/api/requests/${encodeURIComponent(id)}`;
 
@@ -88,15 +74,6 @@ export function useTrailCheck(id: string) {
 
 export function useMyProjects() {
   return useQuery({ queryKey: requestKeys.projects, queryFn: () => apiFetch<ProjectSummary[]>('/api/projects'), staleTime: 5 * 60_000 });
-}
-
-// A changed request may move between desks, so every list is stale; the detail we already hold.
-// A read of the detail still in flight was asked before this answer and would overwrite it with the
-// older state, so it is cancelled first.
-export async function settle(queryClient: QueryClient, detail: RequestDetail) {
-  await queryClient.cancelQueries({ queryKey: requestKeys.detail(detail.id), exact: true });
-  queryClient.setQueryData(requestKeys.detail(detail.id), detail);
-  await queryClient.invalidateQueries({ queryKey: requestKeys.lists() });
 }
 
 export function useCreateDraft() {

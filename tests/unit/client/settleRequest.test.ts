@@ -3,7 +3,7 @@
 import { QueryClient } from '@tanstack/react-query';
 import { describe, expect, it } from 'vitest';
 import type { RequestDetail } from '../../../shared/requests/types';
-import { requestKeys, settle } from '../../../features/requests/api';
+import { requestKeys, settle } from '../../../features/requests/requestCache';
 
 const detailAt = (state: string, version: number) => ({ id: 'r-1', state, version }) as unknown as RequestDetail;
 
