@@ -27,7 +27,7 @@ type Props = {
 function Evidence({ evidence }: { evidence: NonNullable<ConditionListItem['condition']['evidence']> }) {
   return (
     <Pressable
-      accessibilityRole="link"
+      accessibilityRole="button"
       accessibilityLabel={`Open the evidence, ${evidence.fileName}`}
       onPress={() => void Linking.openURL(attachmentUrl(evidence.id))}
       style={styles.evidence}
