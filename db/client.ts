@@ -16,6 +16,14 @@ export function createDatabase(url: string, max = 10): { db: Database; pool: Poo
   return { db, pool };
 }
 
+// A connection the pool could not open (the database down or restarting), told apart from other
+// services refusing a connection when the error reaches the person (server/http/errors.ts).
+export class DatabaseUnreachable extends Error {
+  constructor(cause: unknown) {
+    super(`database unreachable: ${cause instanceof Error ? cause.message : String(cause)}`, { cause });
+  }
+}
+
 // Drizzle's transaction gives its client back only once BEGIN has succeeded; when the database
 // closed the connection a moment before (a restart), BEGIN fails and the client stays checked out
 // for good, so each restart shrank the pool until no request could get a connection. A client whose
@@ -24,7 +32,9 @@ export function createDatabase(url: string, max = 10): { db: Database; pool: Poo
 function giveBackBrokenClients(pool: Pool): void {
   const connect = pool.connect.bind(pool) as (callback?: unknown) => Promise<PoolClient> | void;
   const checkedOut = async (): Promise<PoolClient> => {
-    const client = (await connect()) as PoolClient;
+    const client = await (connect() as Promise<PoolClient>).catch((err: unknown) => {
+      throw new DatabaseUnreachable(err);
+    });
     const release = client.release;
     let released = false;
     const giveBack = (err?: Error | boolean) => {

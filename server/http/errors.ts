@@ -2,6 +2,7 @@
 import type { ErrorRequestHandler } from 'express';
 import { MulterError } from 'multer';
 import type { ZodError } from 'zod';
+import { DatabaseUnreachable } from '../../db/client';
 
 export class HttpError extends Error {
   constructor(
@@ -52,6 +53,7 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   // refusing a connection is never reported as the database.
   let viaDatabase = false;
   for (let e = err, depth = 0; e && typeof e === 'object' && depth < 6; e = (e as { cause?: unknown }).cause, depth++) {
+    if (e instanceof DatabaseUnreachable) return true;
     viaDatabase ||= e.constructor?.name === 'DrizzleQueryError' || 'severity' in e;
     if (!viaDatabase) continue;
     const code = (e as { code?: unknown }).code;
