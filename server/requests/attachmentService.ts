@@ -9,6 +9,7 @@ import type { Role } from '../../shared/roles';
 import { HttpError } from '../http/errors';
 import { isProjectMember } from '../projects/projectRepository';
 import type { ObjectStore } from '../storage/objectStore';
+import type { RecordedAt } from '../trail/trailChain';
 import type { StoredUpload } from '../storage/streamingUploadStorage';
 import { previewableTypes } from '../storage/acceptedFileTypes';
 import sharp from 'sharp';
@@ -49,6 +50,7 @@ export async function recordUploads(
   revision: number,
   purpose: UploadPurpose,
   files: ReceivedFile[],
+  when: RecordedAt = {},
 ): Promise<AttachmentSummary[]> {
   const removeAll = () => Promise.allSettled(files.map((f) => deps.store.remove(f.key)));
   if (files.length === 0) throw new HttpError(400, 'no_files', 'Choose at least one file to upload.');
@@ -68,6 +70,7 @@ export async function recordUploads(
             sizeBytes: f.size,
             sha256: f.sha256,
             uploadedById: actor.id,
+            ...(when.at ? { uploadedAt: when.at } : {}),
           })),
         )
         .returning(),

@@ -8,14 +8,14 @@ import type { RequestDraft } from '../../shared/requests/requestBody';
 import type { Actor } from '../../shared/requests/types';
 import { HttpError } from '../http/errors';
 import { isProjectMember } from '../projects/projectRepository';
-import { appendTrailEvent } from '../trail/trailChain';
+import { appendTrailEvent, type RecordedAt } from '../trail/trailChain';
 import { mayRead } from './access';
 import { lockRequest, projectById, takeRequestNumber } from './requestRepository';
 
 const editableStates = ['drafting', 'revising'];
 const untitled = 'Untitled request';
 
-export async function createDraft(db: Database, actor: Actor, draft: RequestDraft): Promise<string> {
+export async function createDraft(db: Database, actor: Actor, draft: RequestDraft, when: RecordedAt = {}): Promise<string> {
   if (actor.role !== 'contractor') throw new HttpError(403, 'not_contractor', 'Only a contractor starts a request.');
   const project = await projectById(db, draft.projectId);
   if (!project || !(await isProjectMember(db, project.id, actor.id))) {
@@ -24,11 +24,10 @@ export async function createDraft(db: Database, actor: Actor, draft: RequestDraf
   const id = randomUUID();
   await db.transaction(async (tx) => {
     const number = await takeRequestNumber(tx, project.id);
-    const [created] = await tx
+    await tx
       .insert(changeRequests)
-      .values({ id, number, projectId: project.id, type: draft.type, title: draft.title ?? untitled, state: 'drafting', filedById: actor.id })
-      .returning({ createdAt: changeRequests.createdAt });
-    await tx.insert(requestRevisions).values({ requestId: id, revision: 1, body: draft });
+      .values({ id, number, projectId: project.id, type: draft.type, title: draft.title ?? untitled, state: 'drafting', filedById: actor.id, ...(when.at ? { createdAt: when.at, updatedAt: when.at } : {}) });
+    await tx.insert(requestRevisions).values({ requestId: id, revision: 1, body: draft, ...(when.at ? { createdAt: when.at } : {}) });
     const event = await appendTrailEvent(tx, {
       requestId: id,
       eventType: 'created',
@@ -36,14 +35,14 @@ export async function createDraft(db: Database, actor: Actor, draft: RequestDraf
       stateAfter: 'drafting',
       actor,
       payload: { number, type: draft.type, revision: 1 },
+      at: when.at,
     });
     await tx.update(changeRequests).set({ deskSince: event.createdAt }).where(eq(changeRequests.id, id));
-    void created;
   });
   return id;
 }
 
-export async function updateDraft(db: Database, actor: Actor, requestId: string, version: number, draft: RequestDraft): Promise<void> {
+export async function updateDraft(db: Database, actor: Actor, requestId: string, version: number, draft: RequestDraft, when: RecordedAt = {}): Promise<void> {
   await db.transaction(async (tx) => {
     const locked = await lockRequest(tx, requestId);
     // An auditor sees every request, so for them it exists: refused (403), not hidden (404).
@@ -69,7 +68,7 @@ export async function updateDraft(db: Database, actor: Actor, requestId: string,
       .where(and(eq(requestRevisions.requestId, requestId), eq(requestRevisions.revision, r.currentRevision)));
     await tx
       .update(changeRequests)
-      .set({ title: draft.title ?? untitled, version: sql`${changeRequests.version} + 1`, updatedAt: sql`now()` })
+      .set({ title: draft.title ?? untitled, version: sql`${changeRequests.version} + 1`, updatedAt: when.at ?? sql`now()` })
       .where(eq(changeRequests.id, requestId));
   });
 }

@@ -18,7 +18,7 @@ import { isProjectMember } from '../projects/projectRepository';
 import { mayRead } from '../requests/access';
 import { staleVersion } from '../requests/draftService';
 import { attachmentOfRequest, currentRevisionRow, lockRequest, membersWithRole, openConditionCount } from '../requests/requestRepository';
-import { appendTrailEvent } from '../trail/trailChain';
+import { appendTrailEvent, type RecordedAt } from '../trail/trailChain';
 import { notificationsFor } from './notifications';
 import { queueDecisionRecord } from '../documents/decisionRecordJob';
 
@@ -26,8 +26,9 @@ type Locked = NonNullable<Awaited<ReturnType<typeof lockRequest>>> & { actorId: 
 type Change = Partial<typeof changeRequests.$inferInsert>;
 
 // Checks that need the database, and the side writes a move carries; returns the trail payload.
-async function prepareMove(tx: Transaction, locked: Locked, input: WorkflowEventInput, change: Change): Promise<Record<string, unknown>> {
+async function prepareMove(tx: Transaction, locked: Locked, input: WorkflowEventInput, change: Change, when: RecordedAt): Promise<Record<string, unknown>> {
   const r = locked.request;
+  const now = when.at ?? sql`now()`;
   switch (input.type) {
     case 'submit':
     case 'resubmit': {
@@ -50,7 +51,7 @@ async function prepareMove(tx: Transaction, locked: Locked, input: WorkflowEvent
       }
       await tx
         .update(requestRevisions)
-        .set({ engineering, submittedAt: sql`now()` })
+        .set({ engineering, submittedAt: now })
         .where(and(eq(requestRevisions.requestId, r.id), eq(requestRevisions.revision, r.currentRevision)));
       change.title = body.data.title;
       return { revision: r.currentRevision, body: body.data, attachments: files, engineering };
@@ -67,7 +68,7 @@ async function prepareMove(tx: Transaction, locked: Locked, input: WorkflowEvent
       const current = await currentRevisionRow(tx, r.id, r.currentRevision);
       const next = r.currentRevision + 1;
       // The new revision starts as a copy of the one returned; the old one stays as it was.
-      await tx.insert(requestRevisions).values({ requestId: r.id, revision: next, body: current?.body ?? {} });
+      await tx.insert(requestRevisions).values({ requestId: r.id, revision: next, body: current?.body ?? {}, ...(when.at ? { createdAt: when.at } : {}) });
       change.currentRevision = next;
       return { returnedRevision: r.currentRevision, newRevision: next };
     }
@@ -92,7 +93,7 @@ async function prepareMove(tx: Transaction, locked: Locked, input: WorkflowEvent
       }
       const [condition] = await tx
         .update(requestConditions)
-        .set({ satisfiedAt: sql`now()`, satisfiedById: locked.actorId, note: input.comment, evidenceAttachmentId: evidence.id })
+        .set({ satisfiedAt: now, satisfiedById: locked.actorId, note: input.comment, evidenceAttachmentId: evidence.id })
         .where(and(eq(requestConditions.id, input.conditionId), eq(requestConditions.requestId, r.id), isNull(requestConditions.satisfiedAt)))
         .returning({ id: requestConditions.id, seq: requestConditions.seq, text: requestConditions.text });
       if (!condition) throw new HttpError(409, 'condition_not_open', 'That condition is not open on this request (already satisfied, or not one of its conditions).');
@@ -118,7 +119,7 @@ async function prepareMove(tx: Transaction, locked: Locked, input: WorkflowEvent
   }
 }
 
-export async function applyEvent(deps: { db: Database; publicUrl: string }, actor: Actor, requestId: string, input: WorkflowEventInput): Promise<void> {
+export async function applyEvent(deps: { db: Database; publicUrl: string }, actor: Actor, requestId: string, input: WorkflowEventInput, when: RecordedAt = {}): Promise<void> {
   await deps.db.transaction(async (tx) => {
     const found = await lockRequest(tx, requestId);
     if (!found || !(await mayRead(tx, actor, found.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
@@ -145,7 +146,7 @@ export async function applyEvent(deps: { db: Database; publicUrl: string }, acto
     if (!verdict.allowed) throw new HttpError(verdict.status, verdict.code, verdict.message);
 
     const change: Change = {};
-    const payload = await prepareMove(tx, locked, input, change);
+    const payload = await prepareMove(tx, locked, input, change, when);
     const stateAfter = verdict.nextState;
     const event = await appendTrailEvent(tx, {
       requestId: r.id,
@@ -155,6 +156,7 @@ export async function applyEvent(deps: { db: Database; publicUrl: string }, acto
       actor,
       comment: input.comment ?? null,
       payload,
+      at: when.at,
     });
     // The desk clock restarts when the request reaches another desk or another engineer.
     const newDesk = stateAfter !== stateBefore || input.type === 'reassign';
@@ -183,7 +185,7 @@ export async function applyEvent(deps: { db: Database; publicUrl: string }, acto
 }
 
 // A comment is on the record (a trail event) but moves nothing, so it needs no version.
-export async function addComment(db: Database, actor: Actor, requestId: string, comment: string): Promise<void> {
+export async function addComment(db: Database, actor: Actor, requestId: string, comment: string, when: RecordedAt = {}): Promise<void> {
   await db.transaction(async (tx) => {
     const found = await lockRequest(tx, requestId);
     if (!found || !(await mayRead(tx, actor, found.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
@@ -193,6 +195,6 @@ export async function addComment(db: Database, actor: Actor, requestId: string, 
     const facts: WorkflowFacts = { assignedEorId: r.assignedEorId, federalAid: found.federalAid, majorChange: r.majorChange, federalConcurrence: false, openConditions: 0 };
     const verdict = evaluateEvent(r.state, facts, { type: 'comment', actor: { id: actor.id, role: actor.role, member } });
     if (!verdict.allowed) throw new HttpError(verdict.status, verdict.code, verdict.code === 'not_your_move' ? 'Only the people working on this project comment on its requests.' : verdict.message);
-    await appendTrailEvent(tx, { requestId: r.id, eventType: 'commented', stateBefore: r.state, stateAfter: r.state, actor, comment });
+    await appendTrailEvent(tx, { requestId: r.id, eventType: 'commented', stateBefore: r.state, stateAfter: r.state, actor, comment, at: when.at });
   });
 }
