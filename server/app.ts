@@ -6,6 +6,7 @@ import { toNodeHandler } from 'better-auth/node';
 import type { Database } from '../db/client';
 import { clientAddressHeader, type Auth } from './auth/auth';
 import { auditRoutes } from './audit/auditRoutes';
+import { benchBaselineRoutes } from './bench/baselineRoutes';
 import { actorOf, requireActor } from './auth/requireActor';
 import { adminRoutes } from './admin/adminRoutes';
 import { invitationRoutes } from './admin/invitationRoutes';
@@ -59,6 +60,7 @@ export function createApp(parts: AppParts) {
   signedIn.use(adminRoutes({ db, mailer, publicUrl: env.PUBLIC_URL }));
   signedIn.use(auditRoutes(db));
   signedIn.use(conditionRoutes(db));
+  if (process.env.SPANRELAY_BENCH === '1') signedIn.use(benchBaselineRoutes(db));
   signedIn.use(requestRoutes({ db, store, publicUrl: env.PUBLIC_URL, maxFileBytes: env.UPLOAD_MAX_FILE_BYTES, maxRequestBytes: env.UPLOAD_MAX_REQUEST_BYTES }));
   app.use(signedIn);
 

@@ -1,0 +1,67 @@
+#!/usr/bin/env bash
+# npm run bench: a PostgreSQL cluster of its own (.data/pg-bench on 56632) with a fresh
+# spanrelay_bench database seeded at agency scale, the S3 and SMTP fakes and the server on ports
+# of their own (56633-56636, clear of the dev and test instances), then the measurements
+# (main.ts). Everything it started is stopped at the end, whatever happens.
+# BENCH_SCALE=0.01 for a quick try; BENCH_SECONDS and BENCH_CONNECTIONS change the load runs.
+set -euo pipefail
+source "$(dirname "${BASH_SOURCE[0]}")/../lib.sh"
+cd "$ROOT"
+
+PG_PORT=56632
+S3_PORT=56633
+SMTP_PORT=56634
+MAIL_CATCHER_PORT=56635
+APP_PORT=56636
+BENCH_DIR="$DATA/bench"
+mkdir -p "$BENCH_DIR"
+
+export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/spanrelay_bench"
+export S3_ENDPOINT="http://127.0.0.1:$S3_PORT" S3_BUCKET=spanrelay-bench SMTP_HOST=127.0.0.1 SMTP_PORT S3_PORT MAIL_CATCHER_PORT
+export PORT="$APP_PORT" PUBLIC_URL="http://127.0.0.1:$APP_PORT"
+export BETTER_AUTH_SECRET="spanrelay-benchmark-secret-not-for-production-use"
+# Development, as in npm start: production asks the browser to upgrade every load to HTTPS.
+export NODE_ENV=development
+export BENCH_URL="$PUBLIC_URL"
+
+TSX="$ROOT/node_modules/.bin/tsx"
+FAKES_PID=""
+SERVER_PID=""
+cleanup() {
+  for pid in $SERVER_PID $FAKES_PID; do kill -TERM "$pid" 2>/dev/null || true; done
+  for pid in $SERVER_PID $FAKES_PID; do wait "$pid" 2>/dev/null || true; done
+  pg_down pg-bench
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+ensure_node_modules
+ensure_chromium
+# BENCH_WEB_EXPORT=0 measures dist as it is (another export may be in use on this checkout).
+if [ "${BENCH_WEB_EXPORT:-1}" = 1 ]; then ensure_web_export; fi
+export WEB_DIST="$ROOT/dist"
+
+pg_up pg-bench "$PG_PORT"
+# The trail refuses TRUNCATE and DELETE, so each run starts from a new database.
+pg_recreate_db "$PG_PORT" spanrelay_bench
+
+rm -rf "$BENCH_DIR/fakes"
+FAKES_DIR="$BENCH_DIR/fakes" "$TSX" docker-free-scripts/fakes/run-fakes.ts >"$BENCH_DIR/fakes.log" 2>&1 &
+FAKES_PID=$!
+wait_for_http "http://127.0.0.1:$MAIL_CATCHER_PORT/messages" || { cat "$BENCH_DIR/fakes.log" >&2; exit 1; }
+
+log "seeding the benchmark database"
+"$TSX" docker-free-scripts/bench/seed.ts
+
+SPANRELAY_BENCH=1 "$TSX" server/index.ts >"$BENCH_DIR/server.log" 2>&1 &
+SERVER_PID=$!
+wait_for_http "$PUBLIC_URL/api/health" || { cat "$BENCH_DIR/server.log" >&2; exit 1; }
+
+# BENCH_HOLD=1 keeps the seeded database and the server up for a closer look (EXPLAIN, a
+# profiler) until interrupted, instead of measuring.
+if [ "${BENCH_HOLD:-0}" = 1 ]; then
+  log "holding: server on $PUBLIC_URL, database $DATABASE_URL (Ctrl-C stops everything)"
+  wait "$SERVER_PID"
+  exit 0
+fi
+"$TSX" docker-free-scripts/bench/main.ts
