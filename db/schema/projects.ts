@@ -22,7 +22,11 @@ export const projects = pgTable('projects', {
   // Next request sequence; incremented under the row lock of the filing transaction.
   nextRequestSeq: integer('next_request_seq').notNull().default(1),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-});
+}, (t) => [
+  // The register's text search looks up projects by name and structure number first (pg_trgm).
+  index('projects_name_trgm_idx').using('gin', t.name.op('gin_trgm_ops')),
+  index('projects_structure_number_trgm_idx').using('gin', t.structureNumber.op('gin_trgm_ops')),
+]);
 
 export const projectMembers = pgTable(
   'project_members',

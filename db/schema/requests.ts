@@ -29,9 +29,14 @@ export const changeRequests = pgTable(
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
-    index('change_requests_project_idx').on(t.projectId),
+    // A desk is some states on the reader's projects: both columns, so the desk list reads only its
+    // own rows (it also serves every lookup by project alone).
+    index('change_requests_project_state_idx').on(t.projectId, t.state),
     index('change_requests_state_idx').on(t.state),
     index('change_requests_desk_since_idx').on(t.deskSince, t.id),
+    // The register's text search (ILIKE '%…%') on title and number, through trigrams (pg_trgm).
+    index('change_requests_title_trgm_idx').using('gin', t.title.op('gin_trgm_ops')),
+    index('change_requests_number_trgm_idx').using('gin', t.number.op('gin_trgm_ops')),
   ],
 );
 

@@ -9,9 +9,8 @@ import type { Actor, RequestDetail, RequestPage } from '../../shared/requests/ty
 import { availableEvents } from '../../shared/workflow/evaluate';
 import type { WorkflowFacts } from '../../shared/workflow/rules';
 import { HttpError } from '../http/errors';
-import { isProjectMember } from '../projects/projectRepository';
 import { verifyTrail } from '../trail/trailChain';
-import { mayRead, readableProjectIds } from './access';
+import { mayRead } from './access';
 import {
   attachmentsOf,
   conditionsOf,
@@ -19,6 +18,7 @@ import {
   listRequests,
   membersWithRole,
   openConditionCount,
+  requestForReader,
   requestRow,
   requestSummary,
   revisionsOf,
@@ -60,7 +60,7 @@ function isDatabaseTime(key: string): boolean {
 }
 
 // The filters as the repository takes them, narrowed to what this reader may see.
-async function filterFor(db: Database, actor: Actor, q: RequestFilterQuery): Promise<RequestFilter> {
+function filterFor(actor: Actor, q: RequestFilterQuery): RequestFilter {
   let states: string[] | undefined = q.state ? [q.state] : undefined;
   const narrow = (allowed: readonly string[]) => {
     states = states ? states.filter((s) => allowed.includes(s)) : [...allowed];
@@ -68,7 +68,8 @@ async function filterFor(db: Database, actor: Actor, q: RequestFilterQuery): Pro
   if (q.desk === 'mine') narrow(statesAtDesk(actor.role));
   if (q.atDesk) narrow(q.atDesk === 'settled' ? requestStates.filter((s) => requestStateInfo[s].settled) : statesAtDesk(q.atDesk));
   return {
-    projectIds: await readableProjectIds(db, actor),
+    // Auditors read every project; everyone else their own, looked up inside the list query.
+    memberId: actor.role === 'auditor' ? undefined : actor.id,
     states,
     assignedEorId: q.desk === 'mine' && actor.role === 'engineer_of_record' ? actor.id : undefined,
     type: q.type,
@@ -78,14 +79,14 @@ async function filterFor(db: Database, actor: Actor, q: RequestFilterQuery): Pro
 }
 
 export async function listFor(db: Database, actor: Actor, q: RequestListQuery): Promise<RequestPage> {
-  const rows = await listRequests(db, await filterFor(db, actor, q), { sort: q.sort, after: q.cursor ? decodeCursor(q.cursor) : undefined }, q.limit + 1);
+  const rows = await listRequests(db, filterFor(actor, q), { sort: q.sort, after: q.cursor ? decodeCursor(q.cursor) : undefined }, q.limit + 1);
   const page = rows.slice(0, q.limit);
   const last = page[page.length - 1];
   return { items: page.map((r) => r.summary), nextCursor: rows.length > q.limit && last ? encodeCursor(last.sortKey, last.summary.id) : null };
 }
 
 export async function countsFor(db: Database, actor: Actor, q: RequestFilterQuery): Promise<RequestCounts> {
-  const rows = await countRequests(db, await filterFor(db, actor, q));
+  const rows = await countRequests(db, filterFor(actor, q));
   const counts: RequestCounts = { total: 0, overdue: 0, byState: {} };
   for (const row of rows) {
     if (!isRequestState(row.state)) continue;
@@ -109,32 +110,42 @@ export async function workflowFactsOf(db: Database, requestId: string): Promise<
 }
 
 export async function detailFor(db: Database, actor: Actor, requestId: string): Promise<RequestDetail> {
-  const summary = await requestSummary(db, requestId);
+  const found = await requestForReader(db, requestId, actor.id);
   // Same answer for "missing" and "not yours", so ids of other projects cannot be probed.
-  if (!summary || !(await mayRead(db, actor, summary.project.id))) {
+  if (!found || !(actor.role === 'auditor' || found.member)) {
     throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
   }
-  const record = (await requestRecord(db, requestId))!;
-  const member = await isProjectMember(db, summary.project.id, actor.id);
+  const record = await recordOf(db, found);
   const state = isRequestState(record.state) ? record.state : requestStates[0];
-  return { ...record, availableActions: availableEvents(state, record.facts, { id: actor.id, role: actor.role, member }) };
+  return { ...record, availableActions: availableEvents(state, record.facts, { id: actor.id, role: actor.role, member: found.member }) };
 }
 
 // The request in full, as the record shows it to anyone allowed to read it (no viewer's moves).
 export async function requestRecord(db: Database, requestId: string): Promise<RequestDetail | null> {
-  const summary = await requestSummary(db, requestId);
-  if (!summary) return null;
-  const row = await requestRow(db, requestId);
-  const facts = (await workflowFactsOf(db, requestId))!;
+  const found = await requestForReader(db, requestId, null);
+  return found ? recordOf(db, found) : null;
+}
+
+// The rest of the record in four queries run side by side, whatever the length of the trail.
+async function recordOf(db: Database, found: NonNullable<Awaited<ReturnType<typeof requestForReader>>>): Promise<RequestDetail> {
+  const { summary } = found;
+  const requestId = summary.id;
   const [revisions, files, conditions, trail] = await Promise.all([
     revisionsOf(db, requestId),
     attachmentsOf(db, requestId),
     conditionsOf(db, requestId),
     trailOf(db, requestId),
   ]);
+  const facts: WorkflowFacts = {
+    assignedEorId: found.assignedEorId,
+    federalAid: found.federalAid,
+    majorChange: found.majorChange,
+    federalConcurrence: found.federalConcurrence,
+    openConditions: conditions.filter(({ condition }) => condition.satisfiedAt === null).length,
+  };
   return {
     ...summary,
-    decision: row?.request.decision ?? null,
+    decision: found.decision,
     facts,
     revisions: revisions.map((r, i) => ({
       revision: r.revision,

@@ -96,6 +96,9 @@ function toSummary(row: SummaryRow, now: Date = new Date()): RequestSummary {
 export type RequestFilter = {
   // Projects the reader may see; undefined means every project (auditors).
   projectIds?: string[];
+  // Only projects this person is a member of, looked up inside the query (a reader on two
+  // thousand projects would otherwise send two thousand ids, and wait for them to be read first).
+  memberId?: string;
   states?: string[];
   // Only requests routed to this engineer of record (their desk), when set.
   assignedEorId?: string;
@@ -124,23 +127,37 @@ const sortColumns: Record<RequestSort, { key: SQL; descending: boolean }> = {
   updated: { key: sql`${changeRequests.updatedAt}`, descending: true },
 };
 
-function filterConditions(f: RequestFilter): (SQL | undefined)[] {
+// The projects whose name or structure number holds the text. Read first, so the request query
+// gets their ids as values: as a subquery the planner cannot tell how many match and walks the
+// whole register in desk order for a structure number that matches one project.
+async function projectsNamed(db: Database, like: string): Promise<string[]> {
+  const rows = await db
+    .select({ id: projects.id })
+    .from(projects)
+    .where(or(ilike(projects.name, like), ilike(projects.structureNumber, like)));
+  return rows.map((r) => r.id);
+}
+
+async function filterConditions(db: Database, f: RequestFilter): Promise<(SQL | undefined)[]> {
   const where: (SQL | undefined)[] = [];
   if (f.projectIds) where.push(f.projectIds.length ? inArray(changeRequests.projectId, f.projectIds) : sql`false`);
+  if (f.memberId) where.push(inArray(changeRequests.projectId, db.select({ id: projectMembers.projectId }).from(projectMembers).where(eq(projectMembers.userId, f.memberId))));
   if (f.states) where.push(f.states.length ? inArray(changeRequests.state, f.states) : sql`false`);
   if (f.assignedEorId) where.push(eq(changeRequests.assignedEorId, f.assignedEorId));
   if (f.type) where.push(eq(changeRequests.type, f.type));
   if (f.projectId) where.push(eq(changeRequests.projectId, f.projectId));
   if (f.text) {
     const like = `%${f.text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-    where.push(or(ilike(changeRequests.title, like), ilike(changeRequests.number, like), ilike(projects.name, like), ilike(projects.structureNumber, like)));
+    // Title and number through their trigram indexes, the project's words through its ids.
+    const named = await projectsNamed(db, like);
+    where.push(or(ilike(changeRequests.title, like), ilike(changeRequests.number, like), named.length ? inArray(changeRequests.projectId, named) : undefined));
   }
   return where;
 }
 
 export async function listRequests(db: Database, f: RequestFilter, order: RequestPageOrder, limit: number): Promise<{ summary: RequestSummary; sortKey: string }[]> {
   const { key, descending } = sortColumns[order.sort];
-  const where = filterConditions(f);
+  const where = await filterConditions(db, f);
   if (order.after) {
     const k = sql`${order.after.key}::timestamptz`;
     where.push(
@@ -173,13 +190,56 @@ export async function countRequests(db: Database, f: RequestFilter): Promise<{ s
     })
     .from(changeRequests)
     .innerJoin(projects, eq(projects.id, changeRequests.projectId))
-    .where(and(...filterConditions(f)))
+    .where(and(...(await filterConditions(db, f))))
     .groupBy(changeRequests.state);
 }
 
 export async function requestSummary(db: Executor, id: string): Promise<RequestSummary | null> {
   const [row] = await summaryQuery(db).where(eq(changeRequests.id, id)).limit(1);
   return row ? toSummary(row) : null;
+}
+
+// One request for one reader in a single round trip: its summary, the columns the workflow facts
+// and the record need, and whether the reader is on its project (null reader: nobody is).
+export async function requestForReader(db: Executor, id: string, readerId: string | null) {
+  const member = readerId
+    ? sql<boolean>`exists (select 1 from ${projectMembers} where ${projectMembers.projectId} = ${changeRequests.projectId} and ${projectMembers.userId} = ${readerId})`
+    : sql<boolean>`false`;
+  const rows = await db
+    .select({
+      ...summaryColumns,
+      decision: changeRequests.decision,
+      assignedEorId: changeRequests.assignedEorId,
+      majorChange: changeRequests.majorChange,
+      federalConcurrenceAttachmentId: changeRequests.federalConcurrenceAttachmentId,
+      federalAid: projects.federalAid,
+      member: member.as('member'),
+    })
+    .from(changeRequests)
+    .innerJoin(projects, eq(projects.id, changeRequests.projectId))
+    .innerJoin(users, eq(users.id, changeRequests.filedById))
+    .leftJoin(eorUsers, eq(eorUsers.id, changeRequests.assignedEorId))
+    .where(eq(changeRequests.id, id))
+    .limit(1);
+  const typed: (SummaryRow & {
+    decision: (typeof changeRequests.$inferSelect)['decision'];
+    assignedEorId: string | null;
+    majorChange: boolean | null;
+    federalConcurrenceAttachmentId: string | null;
+    federalAid: boolean;
+    member: boolean;
+  })[] = rows;
+  const row = typed[0];
+  if (!row) return null;
+  return {
+    summary: toSummary(row),
+    decision: row.decision,
+    assignedEorId: row.assignedEorId,
+    majorChange: row.majorChange,
+    federalConcurrence: row.federalConcurrenceAttachmentId !== null,
+    federalAid: row.federalAid,
+    member: row.member,
+  };
 }
 
 export async function lockRequest(tx: Transaction, id: string) {

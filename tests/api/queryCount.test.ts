@@ -1,0 +1,78 @@
+// How many database queries a read makes: a fixed number, whatever the page size or the length of
+// the trail (no query per row). Every statement sent by any pg client in this test process is
+// counted, so the sign-in service's own session lookup is measured too and taken off with /api/me.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import pg from 'pg';
+import { buildTestApp, createScenario, signIn, type TestApp } from '../support/apiHarness';
+import { agentsFor, otherDeviationBody, requestAt } from '../support/requestFixtures';
+
+let statements = 0;
+const clientQuery = pg.Client.prototype.query;
+pg.Client.prototype.query = function countedQuery(this: pg.Client, ...args: unknown[]) {
+  statements += 1;
+  return (clientQuery as (...a: unknown[]) => unknown).apply(this, args);
+} as typeof clientQuery;
+
+type Agent = Awaited<ReturnType<typeof signIn>>;
+
+async function queriesOf(agent: Agent, path: string): Promise<number> {
+  statements = 0;
+  const res = await agent.get(path);
+  expect(res.status, res.text).toBe(200);
+  return statements;
+}
+
+describe('queries per read', () => {
+  let t: TestApp;
+  let s: Awaited<ReturnType<typeof createScenario>>;
+  let a: Awaited<ReturnType<typeof agentsFor>>;
+  let session: number;
+  let longId: string;
+  let shortId: string;
+
+  beforeAll(async () => {
+    t = buildTestApp();
+    s = await createScenario(t.db);
+    a = await agentsFor(t, s);
+    // Seven requests at the section engineer's desk, and a draft with a long trail of comments.
+    for (let i = 0; i < 6; i++) await requestAt(t, s, a, 'section_review');
+    shortId = (await requestAt(t, s, a, 'section_review')).id;
+    const long = await a.contractor.post('/api/requests').send(otherDeviationBody(s.project.id, 'Relocate the bearing anchor bolts at pier 3'));
+    longId = long.body.id;
+    for (let i = 0; i < 12; i++) await a.contractor.post(`/api/requests/${longId}/comments`).send({ comment: `Site note ${i + 1}` });
+    session = await queriesOf(a.section_engineer, '/api/me');
+  });
+  afterAll(() => t.close());
+
+  it('looks the session up in a fixed number of queries (the measure the others are taken against)', () => {
+    expect(session).toBeGreaterThanOrEqual(1);
+    expect(session).toBeLessThanOrEqual(3);
+  });
+
+  it('lists a desk in one query beyond the session, for one row or a full page', async () => {
+    const one = await queriesOf(a.section_engineer, '/api/requests?desk=mine&sort=due&limit=1');
+    const page = await queriesOf(a.section_engineer, '/api/requests?desk=mine&sort=due&limit=25');
+    expect(page - session).toBe(1);
+    expect(one).toBe(page);
+  });
+
+  it('counts a desk in one query beyond the session', async () => {
+    expect((await queriesOf(a.section_engineer, '/api/requests/counts?desk=mine')) - session).toBe(1);
+  });
+
+  it('searches the register in two queries beyond the session: the matching projects, then the page', async () => {
+    const few = await queriesOf(a.auditor, `/api/requests?q=${encodeURIComponent('bearing')}&limit=1`);
+    const many = await queriesOf(a.auditor, `/api/requests?q=${encodeURIComponent(s.project.structureNumber)}&limit=25`);
+    expect(many - session).toBe(2);
+    expect(few).toBe(many);
+  });
+
+  it('reads one request in full in five queries beyond the session, however long its trail', async () => {
+    const short = await queriesOf(a.contractor, `/api/requests/${shortId}`);
+    const long = await queriesOf(a.contractor, `/api/requests/${longId}`);
+    const detail = (await a.contractor.get(`/api/requests/${longId}`)).body as { trail: unknown[] };
+    expect(detail.trail.length).toBe(13);
+    expect(long - session).toBe(5);
+    expect(short).toBe(long);
+  });
+});
