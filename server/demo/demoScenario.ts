@@ -1,59 +1,65 @@
-// The demo scenario: an invented state highway agency, county, bridge, firms and people.
-// None of them is real; they exist so the product can be tried end to end.
+// Loads the demo scenario: the invented agency's people and bridge projects, and fifteen requests
+// replayed through the product's own services at the days of their invented history.
+import { count, eq } from 'drizzle-orm';
 import type { Database } from '../../db/client';
-import { projectMembers, projects } from '../../db/schema';
-import type { Role } from '../../shared/roles';
-import { upsertAccount } from '../people/accountRepository';
+import { changeRequests, projectMembers, projects } from '../../db/schema';
 import type { Actor } from '../../shared/requests/types';
-import { seedDemoRequests } from './demoRequests';
+import { upsertAccount } from '../people/accountRepository';
+import type { ObjectStore } from '../storage/objectStore';
+import { demoPassword, demoPeople, demoProjects, type DemoPersonKey, type DemoProjectKey } from './demoCast';
+import { demoClock } from './demoClock';
+import { runStory } from './storyRunner';
+import type { RequestStory, StoryCalendar } from './storyTypes';
+import { harrowRoadStories } from './stories/harrowRoad';
+import { millRunStories } from './stories/millRun';
+import { pellamCreekStories } from './stories/pellamCreek';
 
-export const demoPassword = 'spanrelay-demo';
-export const demoEmail = (role: Role) => `${role}@demo.spanrelay.test`;
+export { demoEmail, demoPassword, demoProject, demoPeople, demoProjects } from './demoCast';
 
-const agency = 'Marrowfield State Highway Department';
+export type DemoDeps = { db: Database; store: ObjectStore; publicUrl: string; now?: Date };
+export type DemoSeedReport = { projects: Record<DemoProjectKey, { id: string; requestsAdded: number }>; people: Record<DemoPersonKey, string> };
 
-export const demoPeople: { role: Role; name: string; organization: string }[] = [
-  { role: 'contractor', name: 'Dana Ostrow', organization: 'Corbel & Fane Constructors' },
-  { role: 'section_engineer', name: 'Priya Halden', organization: `${agency}, Tallis Section` },
-  { role: 'central_office', name: 'Marcus Trell', organization: `${agency}, Bridge Office` },
-  { role: 'engineer_of_record', name: 'Ruth Caldera, P.E.', organization: 'Hollisford Span Engineers' },
-  { role: 'field_inspector', name: 'Tomas Reyl', organization: `${agency}, Tallis Section` },
-  { role: 'auditor', name: 'June Akers', organization: `${agency}, Internal Review` },
-  { role: 'admin', name: 'Sam Pellow', organization: agency },
-];
+export function demoStories(calendar: StoryCalendar): RequestStory[] {
+  // Filed oldest first, so request numbers follow the order the requests were filed in.
+  return [...pellamCreekStories(calendar), ...harrowRoadStories(calendar), ...millRunStories(calendar)].sort(
+    (a, b) => b.filedOn.daysAgo - a.filedOn.daysAgo || a.filedOn.at.localeCompare(b.filedOn.at),
+  );
+}
 
-export const demoProject = {
-  code: 'PC-0114',
-  name: 'Pellam Creek Bridge, SR 9',
-  structureNumber: '27-0114',
-  featureCarried: 'State Route 9',
-  featureCrossed: 'Pellam Creek',
-  county: 'Tallis County',
-  contractNumber: 'C-27-2026-08',
-  contractorFirm: 'Corbel & Fane Constructors',
-  section: 'Tallis Section',
-};
-
-// Idempotent: running it again updates the same people and project instead of duplicating them,
-// and adds the demo requests only to a project that has none.
-export async function seedDemo(db: Database, publicUrl = 'http://127.0.0.1:8081'): Promise<{ projectId: string; userIds: Record<Role, string> }> {
-  const userIds = {} as Record<Role, string>;
-  for (const person of demoPeople) {
-    userIds[person.role] = await upsertAccount(db, { ...person, email: demoEmail(person.role), password: demoPassword });
+// Idempotent: people and projects are brought up to date in place, and a project's requests are
+// replayed only when it has none, so running it again adds nothing.
+export async function seedDemo(deps: DemoDeps): Promise<DemoSeedReport> {
+  const { db } = deps;
+  const people = {} as Record<DemoPersonKey, Actor>;
+  for (const [key, person] of Object.entries(demoPeople) as [DemoPersonKey, (typeof demoPeople)[DemoPersonKey]][]) {
+    const id = await upsertAccount(db, { email: person.email, name: person.name, role: person.role, organization: person.organization, password: demoPassword });
+    people[key] = { id, name: person.name, email: person.email, role: person.role, organization: person.organization };
   }
-  const [project] = await db
-    .insert(projects)
-    .values(demoProject)
-    .onConflictDoUpdate({ target: projects.code, set: { name: demoProject.name } })
-    .returning({ id: projects.id });
-  if (!project) throw new Error('demo project was not written');
-  await db
-    .insert(projectMembers)
-    .values(Object.values(userIds).map((userId) => ({ projectId: project.id, userId })))
-    .onConflictDoNothing();
-  const people = Object.fromEntries(
-    demoPeople.map((p) => [p.role, { id: userIds[p.role], name: p.name, email: demoEmail(p.role), role: p.role, organization: p.organization }]),
-  ) as Record<Role, Actor>;
-  await seedDemoRequests(db, project.id, people, publicUrl);
-  return { projectId: project.id, userIds };
+
+  const projectIds = {} as Record<DemoProjectKey, string>;
+  for (const [key, facts] of Object.entries(demoProjects) as [DemoProjectKey, (typeof demoProjects)[DemoProjectKey]][]) {
+    const { structure: _structure, spansFt: _spansFt, ...row } = facts;
+    const [project] = await db.insert(projects).values(row).onConflictDoUpdate({ target: projects.code, set: row }).returning({ id: projects.id });
+    projectIds[key] = project!.id;
+  }
+  const memberships = (Object.keys(demoPeople) as DemoPersonKey[]).flatMap((key) => demoPeople[key].projects.map((p) => ({ projectId: projectIds[p], userId: people[key].id })));
+  await db.insert(projectMembers).values(memberships).onConflictDoNothing();
+
+  const untouched = new Set<DemoProjectKey>();
+  for (const key of Object.keys(projectIds) as DemoProjectKey[]) {
+    const [held] = await db.select({ n: count() }).from(changeRequests).where(eq(changeRequests.projectId, projectIds[key]));
+    if ((held?.n ?? 0) === 0) untouched.add(key);
+  }
+  const clock = demoClock(deps.now);
+  const added: Record<DemoProjectKey, number> = { pellamCreek: 0, harrowRoad: 0, millRun: 0 };
+  for (const story of demoStories(clock)) {
+    if (!untouched.has(story.project)) continue;
+    await runStory({ db, store: deps.store, publicUrl: deps.publicUrl, clock, people, projectIds }, story);
+    added[story.project] += 1;
+  }
+
+  return {
+    projects: Object.fromEntries((Object.keys(projectIds) as DemoProjectKey[]).map((k) => [k, { id: projectIds[k], requestsAdded: added[k] }])) as DemoSeedReport['projects'],
+    people: Object.fromEntries((Object.keys(people) as DemoPersonKey[]).map((k) => [k, people[k].id])) as Record<DemoPersonKey, string>,
+  };
 }

@@ -5,6 +5,7 @@ import { setTimeout as sleep } from 'node:timers/promises';
 import { createDatabase } from '../../db/client';
 import { runMigrations } from '../../db/migrate';
 import { seedDemo } from '../../server/demo/demoScenario';
+import { createObjectStore } from '../../server/storage/objectStore';
 import { startSuiteFakes } from '../support/startFakes';
 import { repoRoot, testServerEnv } from '../support/testSettings';
 
@@ -13,7 +14,7 @@ export default async function setup() {
   const env = testServerEnv('e2e');
   const { db, pool } = createDatabase(env.DATABASE_URL, 2);
   await runMigrations(db, pool);
-  await seedDemo(db, env.PUBLIC_URL);
+  await seedDemo({ db, store: createObjectStore(env), publicUrl: env.PUBLIC_URL });
   await pool.end();
 
   if (!process.env.WEB_DIST) throw new Error('WEB_DIST is not set: the test command exports the web app first');

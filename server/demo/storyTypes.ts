@@ -1,0 +1,78 @@
+// A demo request's story: its body and the moves people made on it, each on a day before the
+// seed ran. The runner (storyRunner.ts) replays them through the real services, so every check,
+// trail event, mail and decision record is what the product itself would have made.
+import type { RequestBody, RequestDraft } from '../../shared/requests/requestBody';
+import type { WorkflowEventInput } from '../../shared/workflow/events';
+import type { UploadPurpose } from '../requests/attachmentService';
+import type { DemoPersonKey, DemoProjectKey } from './demoCast';
+import type { SitePhotoSubject } from './demoFiles';
+
+// Agency local time, "HH:MM", so the history reads as a working week.
+export type When = { daysAgo: number; at: string };
+
+type SketchRecipe = {
+  make: 'sketch';
+  fileName: string;
+  sheet: string;
+  title: string;
+  segments?: { fromFt: number; toFt: number; order: number }[];
+  marks?: { atFt: number; label: string; kind: 'planned' | 'proposed' | 'emergency' }[];
+  expansionJoints?: { atFt: number; label: string }[];
+  notes: string[];
+};
+type DataSheetRecipe = {
+  make: 'dataSheet';
+  fileName: string;
+  manufacturer: string;
+  product: string;
+  familyLabel: string;
+  movementCapacityIn: number;
+  minOpeningIn: number;
+  maxOpeningIn: number;
+  notes: string[];
+};
+type LetterRecipe = {
+  make: 'letter';
+  fileName: string;
+  letterhead: string[];
+  to: string[];
+  subject: string;
+  paragraphs: string[];
+  table?: { caption: string; rows: [string, string][] };
+  signature: string[];
+};
+type PhotoRecipe = { make: 'photo'; fileName: string; subject: SitePhotoSubject; seed: number };
+export type FileRecipe = SketchRecipe | DataSheetRecipe | LetterRecipe | PhotoRecipe;
+
+type PlainMove = Exclude<WorkflowEventInput, { type: 'route' | 'reassign' | 'satisfy_condition' | 'record_federal_concurrence' }>;
+type DistributiveOmit<T, K extends keyof never> = T extends unknown ? Omit<T, K> : never;
+
+export type StoryAction =
+  | { attach: FileRecipe; purpose?: UploadPurpose }
+  | { move: DistributiveOmit<PlainMove, 'version'> }
+  | { route: DemoPersonKey; comment?: string }
+  | { reassign: DemoPersonKey; comment: string }
+  | { comment: string }
+  // The contractor edits the current revision (after a return) before resubmitting it.
+  | { revise: (body: RequestBody) => RequestBody }
+  | { satisfy: { seq: number; note: string; evidence: FileRecipe } }
+  | { concurrence: { letter: FileRecipe; comment?: string } };
+
+export type StoryStep = { on: When; by: DemoPersonKey } & StoryAction;
+
+type BodyWithoutProject<T> = T extends unknown ? Omit<T, 'projectId'> : never;
+
+export type RequestStory = {
+  project: DemoProjectKey;
+  filedBy: DemoPersonKey;
+  filedOn: When;
+  // A submitted request's body is complete; a draft's may still be missing fields.
+  body: BodyWithoutProject<RequestBody> | BodyWithoutProject<RequestDraft>;
+  steps: StoryStep[];
+};
+
+// Dates the stories need, relative to the day the seed runs.
+export type StoryCalendar = {
+  // 'YYYY-MM-DD', n days after the seed's day (negative: before).
+  date(daysFromToday: number): string;
+};
