@@ -37,12 +37,15 @@ export async function sitePhoto(spec: { fileName: string; subject: SitePhotoSubj
   const rng = seededRandom(spec.seed);
   const { width, height } = photoSize;
   const scene = draw(rng, width, height);
-  const bytes = await finishPhoto(rng, svgDocument(width, height, scene.defs, scene.picture), svgDocument(width, height, [], scene.mask, '#000'), {
+  // With a backdrop the picture is drawn on a transparent ground so the backdrop shows through.
+  const picture = scene.backdrop ? svgDocument(width, height, scene.defs, scene.picture, 'none') : svgDocument(width, height, scene.defs, scene.picture);
+  const bytes = await finishPhoto(rng, picture, svgDocument(width, height, [], scene.mask, '#000'), {
     width,
     height,
     textureStrength: scene.textureStrength,
     grain: scene.grain,
     quality: scene.quality,
+    backdrop: scene.backdrop && svgDocument(width, height, scene.defs, scene.backdrop),
   });
   return { fileName: spec.fileName, contentType: 'image/jpeg', bytes };
 }

@@ -30,15 +30,25 @@ async function surfaceNoise(rng: Random, width: number, height: number): Promise
   return sum;
 }
 
+// The picture over a background drawn at a quarter of the size and enlarged, which blurs it the
+// way a lens focused on something near would, for a fraction of the cost of a blur filter.
+async function overBackdrop(picture: string, backdrop: string, width: number, height: number): Promise<Buffer> {
+  const [back, front] = await Promise.all([
+    sharp(Buffer.from(backdrop), { density: 18 }).blur(2.2).resize(width, height, { kernel: 'cubic' }).removeAlpha().png({ compressionLevel: 0 }).toBuffer(),
+    sharp(Buffer.from(picture)).blur(0.55).png({ compressionLevel: 0 }).toBuffer(),
+  ]);
+  return sharp(back).composite([{ input: front }]).removeAlpha().raw().toBuffer();
+}
+
 export async function finishPhoto(
   rng: Random,
   picture: string,
   mask: string,
-  options: { width: number; height: number; textureStrength: number; grain: number; quality: number; vignette?: number },
+  options: { width: number; height: number; textureStrength: number; grain: number; quality: number; backdrop?: string; vignette?: number },
 ): Promise<Buffer> {
   const { width, height } = options;
   const [base, maskPixels, noise] = await Promise.all([
-    sharp(Buffer.from(picture)).blur(0.55).removeAlpha().raw().toBuffer(),
+    options.backdrop ? overBackdrop(picture, options.backdrop, width, height) : sharp(Buffer.from(picture)).blur(0.55).removeAlpha().raw().toBuffer(),
     // The mask is drawn at half size too (36 dpi against the SVG's 72).
     sharp(Buffer.from(mask), { density: 36 }).removeAlpha().extractChannel(0).blur(0.8).raw().toBuffer(),
     surfaceNoise(rng, half(width), half(height)),

@@ -12,10 +12,14 @@ export type Scene = {
   grain: number;
   // JPEG quality; scenes full of thin bars compress poorly and take a lower one to stay small.
   quality: number;
+  // Drawn at a quarter of the size and enlarged: an out-of-focus background behind the picture.
+  backdrop?: string[];
 };
 
 export const newScene = (textureStrength = 22, grain = 7, quality = 78): Scene => ({ defs: [], picture: [], mask: [], textureStrength, grain, quality });
 
+// Shapes take fill-opacity or stroke-opacity, never opacity: librsvg draws an element with opacity
+// on a surface of its own first, which made the scenes several times slower to render.
 export const attrs = (a: Record<string, string | number | undefined>) =>
   Object.entries(a)
     .filter(([, v]) => v !== undefined)
@@ -77,9 +81,9 @@ export function bar(scene: Scene, cam: Camera, a: Vec3, b: Vec3, diameterFt: num
   };
   scene.picture.push(`<polygon points="${quad(0, 1)}" fill="${colour}"/>`);
   if (wa > 1.6 || wb > 1.6) {
-    scene.picture.push(`<polygon points="${quad(0.22, 0.35)}" fill="${light}" opacity="0.75"/>`);
+    scene.picture.push(`<polygon points="${quad(0.22, 0.35)}" fill="${light}" fill-opacity="0.75"/>`);
     // The underside turns away from the light.
-    if (wa > 6 || wb > 6) scene.picture.push(`<polygon points="${quad(-0.32, 0.3)}" fill="#000" opacity="0.25"/>`);
+    if (wa > 6 || wb > 6) scene.picture.push(`<polygon points="${quad(-0.32, 0.3)}" fill="#000" fill-opacity="0.25"/>`);
   }
   scene.mask.push(`<polygon points="${quad(0, 1)}" fill="#000"/>`);
 }
@@ -95,7 +99,7 @@ export function sky(scene: Scene, rng: Random, width: number, horizonY: number, 
   for (let i = 0; i < 7; i++) {
     const cx = rng.range(-100, width + 100);
     const cy = rng.range(rollTop, Math.max(rollTop + 20, horizonY - 60));
-    clouds.push(`<ellipse ${attrs({ cx, cy, rx: rng.range(140, 340), ry: rng.range(25, 60), fill: 'url(#cloud)', opacity: rng.range(0.5, 1) })}/>`);
+    clouds.push(`<ellipse ${attrs({ cx, cy, rx: rng.range(140, 340), ry: rng.range(25, 60), fill: 'url(#cloud)', 'fill-opacity': rng.range(0.5, 1) })}/>`);
   }
   scene.picture.push(clouds.join(''));
   scene.mask.push(`<rect x="-50" y="-60" width="${width + 100}" height="${bottom + 60}" fill="#000"/>`);
@@ -103,7 +107,6 @@ export function sky(scene: Scene, rng: Random, width: number, horizonY: number, 
 
 // A far tree line along the horizon, hazed and softened as a distant band would be.
 export function treeLine(scene: Scene, rng: Random, width: number, baseY: number, heightPx: number, colour = '#4C6450'): void {
-  scene.defs.push(`<filter id="far" x="-5%" y="-50%" width="110%" height="200%"><feGaussianBlur stdDeviation="2.2"/></filter>`);
   const pts: string[] = [`-20,${baseY + 30}`];
   let h = heightPx * 0.6;
   for (let x = -20; x <= width + 20; x += 14) {
@@ -111,7 +114,10 @@ export function treeLine(scene: Scene, rng: Random, width: number, baseY: number
     pts.push(`${x},${(baseY - h - rng.range(0, heightPx * 0.15)).toFixed(1)}`);
   }
   pts.push(`${width + 20},${baseY + 30}`);
-  scene.picture.push(`<polygon points="${pts.join(' ')}" fill="${colour}" filter="url(#far)"/>`);
+  // Softened by a faint copy raised a little above it (a blur filter across the frame costs more
+  // than the whole rest of a simple scene).
+  scene.picture.push(`<polygon points="${pts.join(' ')}" fill="${colour}" fill-opacity="0.45" transform="translate(0 -2.5)"/>`);
+  scene.picture.push(`<polygon points="${pts.join(' ')}" fill="${colour}"/>`);
   scene.mask.push(`<polygon points="${pts.join(' ')}" fill="${grey(0.25)}"/>`);
 }
 
@@ -142,7 +148,7 @@ export function worker(
   const neck = [shoulder[0] + lean * 0.15, shoulder[1] - 3 * u] as const;
   const p = (pts: (readonly [number, number])[]) => pts.map((q) => `${q[0].toFixed(1)},${q[1].toFixed(1)}`).join(' ');
   // Contact shadow on the ground, so the figure stands rather than floats.
-  const parts: string[] = [`<ellipse ${attrs({ cx: x + 4 * u, cy: y - 0.5 * u, rx: 15 * u, ry: 3 * u, fill: '#000', opacity: 0.28 })}/>`];
+  const parts: string[] = [`<ellipse ${attrs({ cx: x + 4 * u, cy: y - 0.5 * u, rx: 15 * u, ry: 3 * u, fill: '#000', 'fill-opacity': 0.28 })}/>`];
   // Legs and boots.
   for (const side of [-1, 1]) {
     const kneeOut = side * 3 * u;
@@ -155,7 +161,7 @@ export function worker(
   for (const t of [0.3, 0.62]) {
     const yL = hip[1] + (shoulder[1] - hip[1]) * t;
     const xL = hip[0] + (shoulder[0] - hip[0]) * t;
-    parts.push(`<polygon points="${p([[xL - 8.5 * u, yL], [xL + 8.5 * u, yL], [xL + 8.5 * u, yL - 2 * u], [xL - 8.5 * u, yL - 2 * u]])}" fill="#D8DCDC" opacity="0.9"/>`);
+    parts.push(`<polygon points="${p([[xL - 8.5 * u, yL], [xL + 8.5 * u, yL], [xL + 8.5 * u, yL - 2 * u], [xL - 8.5 * u, yL - 2 * u]])}" fill="#D8DCDC" fill-opacity="0.9"/>`);
   }
   // Arms: hanging, or reaching forward to a tool.
   for (const side of [-1, 1]) {

@@ -20,13 +20,13 @@ export function bulkheadWithDowels(rng: Random, width: number, height: number): 
   const sheetZ = bz + rng.range(4, 7);
   const sheet: Vec3[] = [];
   for (let x = -23; x <= 23.01; x += 2) sheet.push([x, 0.02, sheetZ + rng.range(-0.4, 0.4)]);
-  face(scene, cam, [...sheet, [23, 0.02, 200], [-23, 0.02, 200]], '#E4E6E3', 0.25, { opacity: 0.92 });
+  face(scene, cam, [...sheet, [23, 0.02, 200], [-23, 0.02, 200]], '#E4E6E3', 0.25, { 'fill-opacity': 0.92 });
   for (let i = 0; i < 26; i++) {
     const x = rng.range(-22, 20);
     const z = sheetZ + rng.range(0.5, 25);
     const a = cam.project([x, 0.03, z]);
     const b = cam.project([x + rng.range(1, 4), 0.03, z + rng.range(-1.5, 1.5)]);
-    if (a && b) scene.picture.push(`<line ${attrs({ x1: a[0], y1: a[1], x2: b[0], y2: b[1], stroke: rng.next() < 0.5 ? '#B9BCBA' : '#FFFFFF', 'stroke-width': cam.pixels([x, 0, z], 0.12), opacity: 0.7, 'stroke-linecap': 'round' })}/>`);
+    if (a && b) scene.picture.push(`<line ${attrs({ x1: a[0], y1: a[1], x2: b[0], y2: b[1], stroke: rng.next() < 0.5 ? '#B9BCBA' : '#FFFFFF', 'stroke-width': cam.pixels([x, 0, z], 0.12), 'stroke-opacity': 0.7, 'stroke-linecap': 'round' })}/>`);
   }
   // A timber laid on the sheet to hold it down.
   const tx = rng.range(-10, 6);
@@ -53,14 +53,14 @@ export function bulkheadWithDowels(rng: Random, width: number, height: number): 
     const x = rng.range(-23, 20);
     const a = cam.project([x, y, bz - 0.01]);
     const b = cam.project([x + rng.range(1, 5), y + rng.range(-0.02, 0.02), bz - 0.01]);
-    if (a && b) scene.picture.push(`<line ${attrs({ x1: a[0], y1: a[1], x2: b[0], y2: b[1], stroke: '#8A6640', 'stroke-width': 1.2, opacity: 0.5 })}/>`);
+    if (a && b) scene.picture.push(`<line ${attrs({ x1: a[0], y1: a[1], x2: b[0], y2: b[1], stroke: '#8A6640', 'stroke-width': 1.2, 'stroke-opacity': 0.5 })}/>`);
   }
   for (let i = 0; i < 16; i++) {
     const x = rng.range(-20, 20);
     const top = cam.project([x, 0.06, bz - 0.01]);
     const w = cam.pixels([x, 0, bz], rng.range(0.05, 0.2));
     const h = cam.pixels([x, 0, bz], rng.range(0.08, 0.4));
-    if (top) scene.picture.push(`<path d="M${(top[0] - w).toFixed(1)},${top[1].toFixed(1)} q0,${(h * 0.8).toFixed(1)} ${w.toFixed(1)},${h.toFixed(1)} q${w.toFixed(1)},${(-h * 0.2).toFixed(1)} ${w.toFixed(1)},${(-h).toFixed(1)} z" fill="#9C9A93" opacity="0.85"/>`);
+    if (top) scene.picture.push(`<path d="M${(top[0] - w).toFixed(1)},${top[1].toFixed(1)} q0,${(h * 0.8).toFixed(1)} ${w.toFixed(1)},${h.toFixed(1)} q${w.toFixed(1)},${(-h * 0.2).toFixed(1)} ${w.toFixed(1)},${(-h).toFixed(1)} z" fill="#9C9A93" fill-opacity="0.85"/>`);
   }
   // Bars and dowels through the bulkhead toward the camera, with a dark hole where each passes.
   const stick = (x: number, y: number, colour: string, light: string, length: number, diameter: number) => {

@@ -24,7 +24,7 @@ export function surroundings(scene: Scene, cam: Camera, rng: Random, eyeHeight: 
   for (let i = 0; i < 9; i++) {
     const z = rng.range(150, 2500);
     const x = rng.range(-1500, 1500);
-    face(scene, cam, [[x, -35, z], [x + rng.range(100, 500), -35, z], [x + rng.range(100, 500), -35, z + rng.range(40, 200)], [x, -35, z + rng.range(40, 200)]], rng.pick(['#8E9868', '#6F7F52', '#9A9A70']), 0.5, { opacity: 0.6 });
+    face(scene, cam, [[x, -35, z], [x + rng.range(100, 500), -35, z], [x + rng.range(100, 500), -35, z + rng.range(40, 200)], [x, -35, z + rng.range(40, 200)]], rng.pick(['#8E9868', '#6F7F52', '#9A9A70']), 0.5, { 'fill-opacity': 0.6 });
   }
   face(scene, cam, [[-22, -0.2, deckEndZ], [22, -0.2, deckEndZ], [22, -0.2, 4000], [-22, -0.2, 4000]], '#6F6F6B', 0.4);
   // Haze over the distance, thickest at the horizon.
@@ -45,12 +45,12 @@ export function stayInPlaceForms(scene: Scene, cam: Camera, x0: number, x1: numb
 }
 
 // The shadow a bar casts on a horizontal surface below it.
-export function barShadow(scene: Scene, cam: Camera, a: Vec3, b: Vec3, diameterFt: number, onY: number): void {
+export function barShadow(scene: Scene, cam: Camera, a: Vec3, b: Vec3, diameterFt: number, onY: number, darkness = 0.32): void {
   const drop = (p: Vec3): Vec3 => {
     const t = (onY - p[1]) / sun[1];
     return [p[0] + sun[0] * t, onY + 0.005, p[2] + sun[2] * t];
   };
-  bar(scene, cam, drop(a), drop(b), diameterFt * 1.4, 'rgba(25,30,28,0.32)', 'rgba(0,0,0,0)', 0.4);
+  bar(scene, cam, drop(a), drop(b), diameterFt * 1.4, `rgba(25,30,28,${darkness})`, 'rgba(0,0,0,0)', 0.4);
 }
 
 export type MatSpec = { x0: number; x1: number; z0: number; z1: number; topY: number; bottomY: number; formY: number; spacingFt: number; shadowsToZ: number; jitter: number };

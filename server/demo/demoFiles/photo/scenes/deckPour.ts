@@ -33,7 +33,7 @@ export function deckPour(rng: Random, width: number, height: number): Scene {
     const p = cam.project(c);
     if (!p) continue;
     const r = cam.pixels(c, rng.range(0.3, 0.9));
-    scene.picture.push(`<ellipse ${attrs({ cx: p[0], cy: p[1], rx: r, ry: r * 0.35, fill: rng.pick(['#85847C', '#605F59', '#7A796F']), opacity: 0.8 })}/>`);
+    scene.picture.push(`<ellipse ${attrs({ cx: p[0], cy: p[1], rx: r, ry: r * 0.35, fill: rng.pick(['#85847C', '#605F59', '#7A796F']), 'fill-opacity': 0.8 })}/>`);
   }
 
   for (const side of [-1, 1] as const) edgeForms(scene, cam, side, 23, 0.5, 170, 0);

@@ -30,7 +30,7 @@ export function broomMarks(scene: Scene, cam: Camera, rng: Random, x0: number, x
     if (!a || !b) continue;
     strokes.push(`<line ${attrs({ x1: a[0], y1: a[1], x2: b[0], y2: b[1], 'stroke-width': Math.max(0.5, cam.pixels([x, 0, z], 0.01)) })}/>`);
   }
-  scene.picture.push(`<g stroke="#5E5D57" opacity="0.16">${strokes.join('')}</g>`);
+  scene.picture.push(`<g stroke="#5E5D57" stroke-opacity="0.16">${strokes.join('')}</g>`);
 }
 
 // Small stones and sand on the surface.

@@ -32,17 +32,17 @@ export function roughenedJoint(rng: Random, width: number, height: number): Scen
     const colour = rng.pick(stones);
     const g = `transform="rotate(${turn} ${c[0].toFixed(1)} ${c[1].toFixed(1)})"`;
     pieces.push(
-      `<ellipse ${attrs({ cx: c[0] + size * 0.25, cy: c[1] + size * 0.3, rx: rx * 1.05, ry: ry * 1.05, fill: '#3F3C37', opacity: 0.5 })} ${g}/>`,
+      `<ellipse ${attrs({ cx: c[0] + size * 0.25, cy: c[1] + size * 0.3, rx: rx * 1.05, ry: ry * 1.05, fill: '#3F3C37', 'fill-opacity': 0.5 })} ${g}/>`,
       `<ellipse ${attrs({ cx: c[0], cy: c[1], rx, ry, fill: colour })} ${g}/>`,
     );
-    if (size > 18) pieces.push(`<ellipse ${attrs({ cx: c[0] - size * 0.25, cy: c[1] - size * 0.25, rx: rx * 0.45, ry: ry * 0.35, fill: '#FFFFFF', opacity: 0.22 })} ${g}/>`);
+    if (size > 18) pieces.push(`<ellipse ${attrs({ cx: c[0] - size * 0.25, cy: c[1] - size * 0.25, rx: rx * 0.45, ry: ry * 0.35, fill: '#FFFFFF', 'fill-opacity': 0.22 })} ${g}/>`);
   }
   // Pits where paste came away.
   for (let i = 0; i < 120; i++) {
     const c = cam.project([rng.range(-1.6, 1.6), rng.range(-slab + 0.02, -0.02), fz - 0.004]);
     if (!c) continue;
     const r = cam.pixels([0, 0, fz], rng.range(0.006, 0.02));
-    pieces.push(`<ellipse ${attrs({ cx: c[0], cy: c[1], rx: r, ry: r * 0.7, fill: '#4A463F', opacity: 0.7 })}/>`);
+    pieces.push(`<ellipse ${attrs({ cx: c[0], cy: c[1], rx: r, ry: r * 0.7, fill: '#4A463F', 'fill-opacity': 0.7 })}/>`);
   }
   scene.picture.push(`<g>${pieces.join('')}</g>`);
   // The arris: a chipped, lighter line along the top edge of the face.
@@ -56,7 +56,8 @@ export function roughenedJoint(rng: Random, width: number, height: number): Scen
       const to: Vec3 = [x + rng.range(-0.03, 0.03), y + rng.range(-0.02, 0.0), fz - rng.range(0.5, 0.75)];
       const hole = cam.project(from);
       if (hole) scene.picture.push(`<ellipse ${attrs({ cx: hole[0], cy: hole[1], rx: cam.pixels(from, d * 0.75), ry: cam.pixels(from, d * 0.65), fill: '#34312C' })}/>`);
-      barShadow(scene, cam, from, to, d, -slab);
+      // Close up, the shadow falls soft and pale on the bright forms.
+      barShadow(scene, cam, from, to, d, -slab, 0.16);
       bar(scene, cam, from, to, d, colour, light);
     }
   }

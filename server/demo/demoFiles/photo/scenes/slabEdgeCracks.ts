@@ -17,7 +17,7 @@ export function slabEdgeCracks(rng: Random, width: number, height: number): Scen
   const jz = rng.range(4.5, 5.5);
   const skew = rng.range(-0.25, 0.25);
   const at = (x: number, dz: number, y = 0): Vec3 => [x, y, jz + dz + x * skew];
-  face(scene, cam, [at(-12, 0), at(12, 0), at(12, 9), at(-12, 9)], '#9C9A92', 1, { opacity: 0.85 });
+  face(scene, cam, [at(-12, 0), at(12, 0), at(12, 9), at(-12, 9)], '#9C9A92', 1, { 'fill-opacity': 0.85 });
   face(scene, cam, [at(-12, -0.015, 0.002), at(12, -0.015, 0.002), at(12, 0.015, 0.002), at(-12, 0.015, 0.002)], '#3C3A35', 0);
   // Cracks leave the joint roughly square to it and wander; the inspector's crayon runs beside.
   const crayon = rng.pick(['#E8C21E', '#2F7FD0']);
@@ -38,14 +38,14 @@ export function slabEdgeCracks(rng: Random, width: number, height: number): Scen
     const screen = pts.map((q) => cam.project(q)).filter((q): q is readonly [number, number] => q !== null);
     if (screen.length < 2) continue;
     const d = screen.map((q, i) => `${i === 0 ? 'M' : 'L'}${q[0].toFixed(1)},${q[1].toFixed(1)}`).join(' ');
-    scene.picture.push(`<path d="${d}" stroke="#D0CEC6" stroke-width="2.6" fill="none" opacity="0.5"/>`);
+    scene.picture.push(`<path d="${d}" stroke="#D0CEC6" stroke-width="2.6" fill="none" stroke-opacity="0.5"/>`);
     scene.picture.push(`<path d="${d}" stroke="#262420" stroke-width="${rng.range(1.5, 2.2).toFixed(2)}" fill="none" stroke-linejoin="round"/>`);
     scene.mask.push(`<path d="${d}" stroke="#000" stroke-width="4" fill="none"/>`);
     // The crayon line, offset a little to one side and stopping short of the crack's end.
     const off = screen.slice(0, -4).map((q, i) => `${i === 0 ? 'M' : 'L'}${(q[0] + 14).toFixed(1)},${(q[1] + 2).toFixed(1)}`).join(' ');
-    scene.picture.push(`<path d="${off}" stroke="${crayon}" stroke-width="5" fill="none" stroke-linecap="round" opacity="0.85"/>`);
+    scene.picture.push(`<path d="${off}" stroke="${crayon}" stroke-width="5" fill="none" stroke-linecap="round" stroke-opacity="0.85"/>`);
     const end = screen[screen.length - 5];
-    if (end) scene.picture.push(`<line ${attrs({ x1: end[0] + 4, y1: end[1] + 2, x2: end[0] + 24, y2: end[1] + 2, stroke: crayon, 'stroke-width': 5, 'stroke-linecap': 'round', opacity: 0.85 })}/>`);
+    if (end) scene.picture.push(`<line ${attrs({ x1: end[0] + 4, y1: end[1] + 2, x2: end[0] + 24, y2: end[1] + 2, stroke: crayon, 'stroke-width': 5, 'stroke-linecap': 'round', 'stroke-opacity': 0.85 })}/>`);
   }
   grit(scene, cam, rng, -5, 5, 0, 9, 140);
   // A tape measure laid across the cracks: yellow blade, black marks at every inch.

@@ -11,9 +11,9 @@ export function stripSealInstalled(rng: Random, width: number, height: number): 
   const eyeY = 5.2;
   const half = 20;
   // Standing near the right-hand barrier, looking down the joint toward the far curb.
-  const cam = camera({ eye: [half - rng.range(4, 6), eyeY, 0], yawDeg: -rng.range(12, 20), pitchDeg: rng.range(19, 23), rollDeg: rng.range(-1.5, 1.5), focalPx: 1250, width, height });
+  const cam = camera({ eye: [half - rng.range(4, 6), eyeY, 0], yawDeg: -rng.range(12, 20), pitchDeg: rng.range(26, 30), rollDeg: rng.range(-1.5, 1.5), focalPx: 1250, width, height });
   surroundings(scene, cam, rng, eyeY, 260);
-  const jz = rng.range(6.5, 8);
+  const jz = rng.range(8, 9.5);
   const gap = rng.range(0.13, 0.2); // about 2 in open at the day's temperature
   // Deck concrete either side, the far side a shade darker (the older placement).
   face(scene, cam, [[-half, 0, -1], [half, 0, -1], [half, 0, jz - 1.25], [-half, 0, jz - 1.25]], '#A8A69F', 0.85);
@@ -22,10 +22,10 @@ export function stripSealInstalled(rng: Random, width: number, height: number): 
   broomMarks(scene, cam, rng, -half, half, jz + gap + 1.25, 70, 700);
   mottle(scene, cam, rng, -half, half, -1, 60, 0, 50, 0.1);
   // Headers: a foot of darker blockout concrete against each rail.
-  face(scene, cam, [[-half, 0, jz - 1.25], [half, 0, jz - 1.25], [half, 0, jz - 0.2], [-half, 0, jz - 0.2]], '#8E8D87', 0.9);
-  face(scene, cam, [[-half, 0, jz + gap + 0.2], [half, 0, jz + gap + 0.2], [half, 0, jz + gap + 1.25], [-half, 0, jz + gap + 1.25]], '#8A8983', 0.9);
+  face(scene, cam, [[-half, 0, jz - 1.25], [half, 0, jz - 1.25], [half, 0, jz - 0.2], [-half, 0, jz - 0.2]], '#85847E', 0.9);
+  face(scene, cam, [[-half, 0, jz + gap + 0.2], [half, 0, jz + gap + 0.2], [half, 0, jz + gap + 1.25], [-half, 0, jz + gap + 1.25]], '#81807A', 0.9);
   // Rails: the top of each steel extrusion, worn bright along its edge.
-  for (const [z0, z1] of [[jz - 0.2, jz], [jz + gap, jz + gap + 0.2]] as const) {
+  for (const [z0, z1] of [[jz - 0.28, jz], [jz + gap, jz + gap + 0.28]] as const) {
     face(scene, cam, [[-half, 0.003, z0], [half, 0.003, z0], [half, 0.003, z1], [-half, 0.003, z1]], '#5E6265', 0.15);
     bar(scene, cam, [-half, 0.006, z0 + 0.01], [half, 0.006, z0 + 0.01], 0.025, '#A5AAAD', '#D0D4D6');
   }
