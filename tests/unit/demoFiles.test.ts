@@ -122,6 +122,10 @@ describe('submittal sketch', () => {
     await expect(submittalSketch({ ...sketch, segments: [{ fromFt: 0, toFt: 20, order: 1 }, { fromFt: 20, toFt: 40, order: 1 }] })).rejects.toThrow(/used once/);
     await expect(submittalSketch({ ...sketch, date: '2027-02-30' })).rejects.toThrow(/not a calendar date/);
     await expect(submittalSketch({ ...sketch, fileName: 'sketch.png' })).rejects.toThrow(/must end in \.pdf/);
+    // What does not fit the sheet is refused, never silently left off.
+    await expect(submittalSketch({ ...sketch, notes: Array.from({ length: 30 }, (_, i) => `Note ${i + 1} about the placement.`) })).rejects.toThrow(/notes need \d+ pt/);
+    const many = Array.from({ length: 31 }, (_, i) => ({ fromFt: i * 10, toFt: i * 10 + 10, order: i + 1 }));
+    await expect(submittalSketch({ ...sketch, spansFt: [310], segments: many })).rejects.toThrow(/do not fit the placement table/);
   });
 });
 

@@ -337,10 +337,13 @@ export async function submittalSketch(spec: SketchSpec): Promise<DemoFile> {
     const top = 512;
     const notesX = frame.left + 24;
     const notesWidth = 560;
-    text('NOTES', notesX, top, 9, 'strong', { characterSpacing: 0.8 });
+    if (spec.notes.length > 0) text('NOTES', notesX, top, 9, 'strong', { characterSpacing: 0.8 });
     let ny = top + 15;
+    // A note that would run into the title block is refused rather than silently left off.
+    doc.font('body').fontSize(7.8);
+    const notesHeight = spec.notes.reduce((h, note) => h + doc.heightOfString(note, { width: notesWidth, lineGap: 1 }) + 3, 0);
+    if (ny + notesHeight > titleBlockTop - 6) throw new Error(`submittalSketch: the notes need ${Math.ceil(notesHeight)} pt and the sheet has ${titleBlockTop - 6 - ny}; shorten them or put them on a second sheet`);
     spec.notes.forEach((note, i) => {
-      if (ny > titleBlockTop - 16) return;
       doc.font('body').fontSize(7.8).fillColor(ink);
       text(`${i + 1}.`, notesX, ny, 7.8);
       doc.text(note, notesX + 14, ny, { width: notesWidth, lineGap: 1 });
@@ -385,8 +388,8 @@ export async function submittalSketch(spec: SketchSpec): Promise<DemoFile> {
     headers.forEach((h, i) => text(h, cols[i]! + 3, ty, 7, 'medium', {}, grey));
     ty += 11;
     line(tx, ty - 2, cols[4]!, ty - 2, 0.4);
+    if (ty + segments.length * 11 + 14 > titleBlockTop) throw new Error(`submittalSketch: ${segments.length} placements do not fit the placement table (at most ${Math.floor((titleBlockTop - 14 - ty) / 11)})`);
     for (const s of segments) {
-      if (ty > titleBlockTop - 14) break;
       [String(s.order), feetInches(s.fromFt), feetInches(s.toFt), feetInches(s.toFt - s.fromFt)].forEach((cell, i) => text(cell, cols[i]! + 3, ty, 7.6));
       ty += 11;
       line(tx, ty - 2, cols[4]!, ty - 2, 0.25, grey);
