@@ -17,6 +17,8 @@ export type RouteFigures = {
   p99Ms: number;
   errors: number;
   ratioToBaseline?: number;
+  // One connection: the time a request takes when it waits for nothing but itself.
+  alone?: { requests: number; p50Ms: number; p95Ms: number };
 };
 
 type RouteSpec = {
@@ -99,7 +101,7 @@ const cycle = <T,>(list: T[]) => {
   return () => list[i++ % list.length]!;
 };
 
-export async function runLoad(base: string, seed: SeedInfo, opts: { connections: number; seconds: number; warmSeconds: number }): Promise<RouteFigures[]> {
+export async function runLoad(base: string, seed: SeedInfo, opts: { connections: number; seconds: number; warmSeconds: number; aloneSeconds: number }): Promise<RouteFigures[]> {
   const [desk, transition, central] = await Promise.all([
     signIn(base, seed.people.deskEngineer),
     signIn(base, seed.people.transitionEngineer),
@@ -124,18 +126,22 @@ export async function runLoad(base: string, seed: SeedInfo, opts: { connections:
   ];
   const transitionSpec: RouteSpec = { route: 'transition', what: 'POST /api/requests/:id/events forward', cookie: transition, method: 'POST', next: nextMove };
 
-  const { connections, seconds, warmSeconds } = opts;
+  const { connections, seconds, warmSeconds, aloneSeconds } = opts;
   const figures: RouteFigures[] = [];
   const measure = async (spec: RouteSpec, amount?: number) => {
     process.stderr.write(`  ${spec.route}: warming up … `);
-    // A bounded run (transitions) warms up on a quarter of what it may use, at most four moves a connection.
+    // A bounded run (transitions) shares its requests out: a warm-up of at most four moves a
+    // connection, a hundred alone, the rest under load; each connection builds one more than it sends.
     const warm = amount ? Math.max(1, Math.min(connections * 4, Math.floor(amount / 4))) : undefined;
+    const single = amount ? Math.max(1, Math.min(100, Math.floor(amount / 10))) : undefined;
+    const loaded = amount ? Math.max(1, amount - warm! - single! - 2 * connections - 2) : undefined;
     await cannon(base, spec, connections, warmSeconds, warm);
     process.stderr.write('measuring … ');
-    // Each connection builds one request more than it sends.
-    const f = await cannon(base, spec, connections, seconds, amount ? Math.max(1, amount - warm! - 2 * connections) : undefined);
-    process.stderr.write(`${f.requestsPerSecond} req/s, p95 ${f.p95Ms} ms\n`);
-    return f;
+    const f = await cannon(base, spec, connections, seconds, loaded);
+    process.stderr.write(`${f.requestsPerSecond} req/s, p95 ${f.p95Ms} ms; alone … `);
+    const one = await cannon(base, spec, 1, aloneSeconds, single);
+    process.stderr.write(`p95 ${one.p95Ms} ms\n`);
+    return { ...f, errors: f.errors + one.errors, alone: { requests: one.requests, p50Ms: one.p50Ms, p95Ms: one.p95Ms } };
   };
 
   // The baseline before and after the routes: the machine is shared, so the ratio is taken to
@@ -153,6 +159,7 @@ export async function runLoad(base: string, seed: SeedInfo, opts: { connections:
     p95Ms: Math.max(before.p95Ms, after.p95Ms),
     p99Ms: Math.max(before.p99Ms, after.p99Ms),
     errors: before.errors + after.errors,
+    alone: after.alone,
     what: `${before.what} (mean of a run before and after the routes: ${before.requestsPerSecond} and ${after.requestsPerSecond} req/s; worst latencies)`,
   };
   return [merged, ...figures].map((f) => ({ ...f, ratioToBaseline: Number((f.requestsPerSecond / baselineRate).toFixed(2)) }));

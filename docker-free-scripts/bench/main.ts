@@ -48,10 +48,12 @@ function printTable(seed: SeedInfo, routes: RouteFigures[], web: WebFigures, eng
   const lines: string[] = [];
   lines.push('');
   lines.push(`Spanrelay benchmark: ${seed.sizes.requests.toLocaleString('en-US')} requests, ${seed.sizes.projects.toLocaleString('en-US')} projects, ${seed.sizes.trailEvents.toLocaleString('en-US')} trail events (seeded in ${seed.seconds.toFixed(1)} s); ${connections} connections; load average ${load.map((l) => l.toFixed(2)).join(' ')}`);
-  lines.push(`${pad('route', 16)}${lpad('req/s', 9)}${lpad('p50 ms', 9)}${lpad('p95 ms', 9)}${lpad('p99 ms', 9)}${lpad('errors', 8)}${lpad('x base', 8)}  target`);
+  lines.push(`${pad('route', 16)}${lpad('req/s', 9)}${lpad('p50 ms', 9)}${lpad('p95 ms', 9)}${lpad('p99 ms', 9)}${lpad('errors', 8)}${lpad('x base', 8)}${lpad('alone p50/p95', 15)}  target (at ${connections} connections)`);
   for (const f of routes) {
-    lines.push(`${pad(f.route, 16)}${lpad(f.requestsPerSecond, 9)}${lpad(f.p50Ms, 9)}${lpad(f.p95Ms, 9)}${lpad(f.p99Ms, 9)}${lpad(f.errors, 8)}${lpad(f.ratioToBaseline?.toFixed(2) ?? '', 8)}  ${verdict(f)}`);
+    const alone = f.alone ? `${f.alone.p50Ms}/${f.alone.p95Ms}` : '';
+    lines.push(`${pad(f.route, 16)}${lpad(f.requestsPerSecond, 9)}${lpad(f.p50Ms, 9)}${lpad(f.p95Ms, 9)}${lpad(f.p99Ms, 9)}${lpad(f.errors, 8)}${lpad(f.ratioToBaseline?.toFixed(2) ?? '', 8)}${lpad(alone, 15)}  ${verdict(f)}`);
   }
+  lines.push('"alone": the same route at one connection, the time a request takes when it queues behind no other.');
   const js = web.initialJs;
   lines.push(`web: initial JS ${js.rawKb} KB raw, ${js.gzipKb} KB gzip (${js.gzipKb <= webTargets.initialGzipKb ? 'met' : 'MISSED'} ≤ ${webTargets.initialGzipKb}); all JS ${web.allJs.rawKb} KB raw, ${web.allJs.gzipKb} KB gzip in ${web.allJs.files} files`);
   lines.push(`web: first desk list rendered, median of ${web.firstDesk.loadsMs.length} cold loads ${web.firstDesk.medianMs} ms (${web.firstDesk.loadsMs.join(', ')}) (${web.firstDesk.medianMs <= webTargets.firstDeskMs ? 'met' : 'MISSED'} ≤ ${webTargets.firstDeskMs})`);
@@ -63,7 +65,7 @@ function printTable(seed: SeedInfo, routes: RouteFigures[], web: WebFigures, eng
 async function main() {
   const seed = JSON.parse(readFileSync(seedInfoPath, 'utf8')) as SeedInfo;
   console.log(`load: ${connections} connections, ${seconds} s a route after a warm-up, on ${base}`);
-  const routes = await runLoad(base, seed, { connections, seconds, warmSeconds: Math.min(3, seconds) });
+  const routes = await runLoad(base, seed, { connections, seconds, warmSeconds: Math.min(3, seconds), aloneSeconds: Math.min(4, seconds) });
 
   console.log('web: weighing the export and timing five cold loads in Chromium');
   const dist = process.env.WEB_DIST ?? join(root, 'dist');
