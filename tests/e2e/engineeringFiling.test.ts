@@ -90,7 +90,7 @@ describe('engineering checks in the web app', () => {
     await page.waitForURL(/\/requests\/[0-9a-f-]{36}$/);
     const jointCheck = page.getByTestId('request-engineering');
     await expect.poll(() => jointCheck.getByTestId('engineering-moment-diagram').count()).toBe(1);
-    expect(await jointCheck.getByTestId('engineering-moment-diagram').getAttribute('aria-label')).toContain('The plans put the joint at 125.0 ft');
+    expect(await jointCheck.getByTestId('engineering-moment-diagram').getAttribute('aria-label')).toContain('The plans put the joint at 190.0 ft');
     await shot('eng-wide-5-demo-joint.png', wide);
     await context.close();
   });

@@ -19,8 +19,8 @@ const viewports = [
   { name: 'wide', width: 1440, height: 900 },
 ];
 
-const jointTitle = 'Move deck construction joint CJ-2 toward pier 2';
-const deckTitle = 'Place the three-span deck in one continuous pour';
+const jointTitle = 'Move deck construction joint CJ-2 closer to pier 1';
+const deckTitle = 'Place the three-span deck in one continuous placement';
 
 describe('the auditor traces a request', () => {
   let browser: Browser;
@@ -70,13 +70,13 @@ describe('the auditor traces a request', () => {
       await expect.poll(() => page.getByTestId('trail-verify-result').textContent(), { timeout: 15_000 }).toMatch(/^Verified: all \d+ entries link up/);
       const entries = await page.getByTestId('trail-entry').count();
       expect(entries).toBeGreaterThanOrEqual(4);
-      expect(await page.getByTestId('trail-request').textContent()).toContain('PC-0114-002');
+      expect(await page.getByTestId('trail-request').textContent()).toContain('PC-0114-004');
       await shot('4-trail-verified');
 
       const csvDownload = page.waitForEvent('download');
       await page.getByTestId('trail-export-csv').click();
       const csv = await csvDownload;
-      expect(csv.suggestedFilename()).toBe('PC-0114-002-trail.csv');
+      expect(csv.suggestedFilename()).toBe('PC-0114-004-trail.csv');
       const csvPath = join(downloads, `${vp.name}-trail.csv`);
       await csv.saveAs(csvPath);
       const lines = readFileSync(csvPath, 'utf8').split('\r\n').filter(Boolean);
@@ -93,7 +93,7 @@ describe('the auditor traces a request', () => {
       const pdfDownload = page.waitForEvent('download');
       await page.getByTestId('trail-export-pdf').click();
       const pdf = await pdfDownload;
-      expect(pdf.suggestedFilename()).toBe('PC-0114-002-decision-record.pdf');
+      expect(pdf.suggestedFilename()).toBe('PC-0114-004-decision-record.pdf');
       const pdfPath = join(downloads, `${vp.name}-decision-record.pdf`);
       await pdf.saveAs(pdfPath);
       expect(readFileSync(pdfPath).subarray(0, 5).toString('latin1')).toBe('%PDF-');
