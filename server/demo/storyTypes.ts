@@ -5,42 +5,16 @@ import type { RequestBody, RequestDraft } from '../../shared/requests/requestBod
 import type { WorkflowEventInput } from '../../shared/workflow/events';
 import type { UploadPurpose } from '../requests/attachmentService';
 import type { DemoPersonKey, DemoProjectKey } from './demoCast';
-import type { SitePhotoSubject } from './demoFiles';
+import type { LetterSpec, SealSheetSpec, SitePhotoSubject, SketchSpec } from './demoFiles';
 
 // Agency local time, "HH:MM", so the history reads as a working week.
 export type When = { daysAgo: number; at: string };
 
-type SketchRecipe = {
-  make: 'sketch';
-  fileName: string;
-  sheet: string;
-  title: string;
-  segments?: { fromFt: number; toFt: number; order: number }[];
-  marks?: { atFt: number; label: string; kind: 'planned' | 'proposed' | 'emergency' }[];
-  expansionJoints?: { atFt: number; label: string }[];
-  notes: string[];
-};
-type DataSheetRecipe = {
-  make: 'dataSheet';
-  fileName: string;
-  manufacturer: string;
-  product: string;
-  familyLabel: string;
-  movementCapacityIn: number;
-  minOpeningIn: number;
-  maxOpeningIn: number;
-  notes: string[];
-};
-type LetterRecipe = {
-  make: 'letter';
-  fileName: string;
-  letterhead: string[];
-  to: string[];
-  subject: string;
-  paragraphs: string[];
-  table?: { caption: string; rows: [string, string][] };
-  signature: string[];
-};
+// What a story says of a file; the runner adds what the real document would carry of its
+// context (project, structure, spans, day, author).
+type SketchRecipe = { make: 'sketch' } & Omit<SketchSpec, 'agency' | 'projectName' | 'structureNumber' | 'preparedBy' | 'date' | 'spansFt'>;
+type DataSheetRecipe = { make: 'dataSheet' } & SealSheetSpec;
+type LetterRecipe = { make: 'letter' } & Omit<LetterSpec, 'date'>;
 type PhotoRecipe = { make: 'photo'; fileName: string; subject: SitePhotoSubject; seed: number };
 export type FileRecipe = SketchRecipe | DataSheetRecipe | LetterRecipe | PhotoRecipe;
 

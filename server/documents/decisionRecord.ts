@@ -2,7 +2,6 @@
 // check and its caution, every step of the trail, the decision and its conditions, and the hash
 // that closes the trail's chain.
 import PDFDocument from 'pdfkit';
-import { join } from 'node:path';
 import { requestTypeLabels, type RequestType } from '../../shared/requests/requestBody';
 import { stateLabel } from '../../shared/requests/states';
 import { labelledBodyFields } from '../../shared/requests/bodyFields';
@@ -10,10 +9,7 @@ import type { RequestDetail } from '../../shared/requests/types';
 import { roleLabels } from '../../shared/roles';
 import { engineeringCaution } from '../../shared/engineering';
 import { workflowEventPastTense } from '../../shared/workflow/events';
-
-const fontDir = join(__dirname, '..', '..', 'node_modules', '@expo-google-fonts', 'work-sans');
-const regular = join(fontDir, '400Regular', 'WorkSans_400Regular.ttf');
-const semibold = join(fontDir, '600SemiBold', 'WorkSans_600SemiBold.ttf');
+import { workSans } from './workSansFonts';
 
 const decisionWords: Record<string, string> = {
   approved: 'Approved',
@@ -27,8 +23,8 @@ export type DecisionRecordInput = { request: RequestDetail; chain: { ok: boolean
 
 export function renderDecisionRecord({ request: r, chain, generatedAt }: DecisionRecordInput): Promise<Buffer> {
   const doc = new PDFDocument({ size: 'LETTER', margin: 54, info: { Title: `${r.number} decision record`, Author: 'Spanrelay' } });
-  doc.registerFont('body', regular);
-  doc.registerFont('strong', semibold);
+  doc.registerFont('body', workSans.body);
+  doc.registerFont('strong', workSans.strong);
   const chunks: Buffer[] = [];
   doc.on('data', (c: Buffer) => chunks.push(c));
   const finished = new Promise<Buffer>((resolve, reject) => {

@@ -2,15 +2,9 @@
 // (the same files the decision record uses), and dates and document id fixed from the spec, so one
 // spec always gives the same bytes (pdfkit derives the trailer ID from the info dictionary).
 import PDFDocument from 'pdfkit';
-import { join } from 'node:path';
+import { workSans } from '../../documents/workSansFonts';
 
-const fontDir = join(__dirname, '..', '..', '..', 'node_modules', '@expo-google-fonts', 'work-sans');
-const fonts = {
-  light: join(fontDir, '300Light', 'WorkSans_300Light.ttf'),
-  body: join(fontDir, '400Regular', 'WorkSans_400Regular.ttf'),
-  medium: join(fontDir, '500Medium', 'WorkSans_500Medium.ttf'),
-  strong: join(fontDir, '600SemiBold', 'WorkSans_600SemiBold.ttf'),
-};
+const fonts = workSans;
 export type FontName = keyof typeof fonts;
 
 // A calendar date as the documents carry it; noon UTC so no time zone moves it to another day.
