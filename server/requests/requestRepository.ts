@@ -1,5 +1,6 @@
 // Database access for requests. Writes run inside the service's transaction, under the request's
 // row lock taken by `lockRequest`.
+import { createHash } from 'node:crypto';
 import { aliasedTable, and, asc, count, desc, eq, gt, ilike, inArray, isNull, lt, or, sql, type SQL } from 'drizzle-orm';
 import type { Database, Transaction } from '../../db/client';
 import { attachments, changeRequests, projectMembers, projects, requestConditions, requestRevisions, trailEvents, users } from '../../db/schema';
@@ -199,13 +200,21 @@ export async function requestSummary(db: Executor, id: string): Promise<RequestS
   return row ? toSummary(row) : null;
 }
 
+// A read of one request, named after its own text: PostgreSQL parses it once per connection and,
+// after five runs, plans it once (a generic plan), which suits a lookup by id whatever the id.
+// Lists are not named: their best plan depends on the reader (a generic plan made for readers of a
+// few projects took 180 ms, not 1.3 ms, for central office on all 2,000), and a search's on its words.
+async function byName<R>(query: { toSQL(): { sql: string }; prepare(name: string): { execute(): Promise<R> } }): Promise<R> {
+  return query.prepare(`request_${createHash('sha1').update(query.toSQL().sql).digest('hex').slice(0, 24)}`).execute();
+}
+
 // One request for one reader in a single round trip: its summary, the columns the workflow facts
 // and the record need, and whether the reader is on its project (null reader: nobody is).
 export async function requestForReader(db: Executor, id: string, readerId: string | null) {
   const member = readerId
     ? sql<boolean>`exists (select 1 from ${projectMembers} where ${projectMembers.projectId} = ${changeRequests.projectId} and ${projectMembers.userId} = ${readerId})`
     : sql<boolean>`false`;
-  const rows = await db
+  const query = db
     .select({
       ...summaryColumns,
       decision: changeRequests.decision,
@@ -221,6 +230,7 @@ export async function requestForReader(db: Executor, id: string, readerId: strin
     .leftJoin(eorUsers, eq(eorUsers.id, changeRequests.assignedEorId))
     .where(eq(changeRequests.id, id))
     .limit(1);
+  const rows = await byName(query);
   const typed: (SummaryRow & {
     decision: (typeof changeRequests.$inferSelect)['decision'];
     assignedEorId: string | null;
@@ -270,7 +280,7 @@ export async function openConditionCount(db: Executor, requestId: string): Promi
 }
 
 export async function revisionsOf(db: Executor, requestId: string) {
-  return db.select().from(requestRevisions).where(eq(requestRevisions.requestId, requestId)).orderBy(asc(requestRevisions.revision));
+  return byName(db.select().from(requestRevisions).where(eq(requestRevisions.requestId, requestId)).orderBy(asc(requestRevisions.revision)));
 }
 
 export async function currentRevisionRow(db: Executor, requestId: string, revision: number) {
@@ -296,12 +306,13 @@ export function toAttachmentSummary(a: typeof attachments.$inferSelect, uploader
 }
 
 export async function attachmentsOf(db: Executor, requestId: string) {
-  return db
+  const query = db
     .select({ attachment: attachments, uploaderName: users.name })
     .from(attachments)
     .innerJoin(users, eq(users.id, attachments.uploadedById))
     .where(eq(attachments.requestId, requestId))
     .orderBy(asc(attachments.uploadedAt));
+  return byName(query);
 }
 
 export async function attachmentOfRequest(db: Executor, requestId: string, attachmentId: string) {
@@ -313,21 +324,23 @@ export async function attachmentOfRequest(db: Executor, requestId: string, attac
 }
 
 export async function conditionsOf(db: Executor, requestId: string) {
-  return db
+  const query = db
     .select({ condition: requestConditions, satisfierName: users.name, satisfierOrganization: users.organization })
     .from(requestConditions)
     .leftJoin(users, eq(users.id, requestConditions.satisfiedById))
     .where(eq(requestConditions.requestId, requestId))
     .orderBy(asc(requestConditions.seq));
+  return byName(query);
 }
 
 export async function trailOf(db: Executor, requestId: string) {
-  return db
+  const query = db
     .select({ event: trailEvents, actorName: users.name, actorOrganization: users.organization })
     .from(trailEvents)
     .innerJoin(users, eq(users.id, trailEvents.actorId))
     .where(eq(trailEvents.requestId, requestId))
     .orderBy(asc(trailEvents.seq));
+  return byName(query);
 }
 
 export async function attachmentWithProject(db: Database, attachmentId: string) {
