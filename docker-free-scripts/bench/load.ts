@@ -120,8 +120,8 @@ export async function runLoad(base: string, seed: SeedInfo, opts: { connections:
 
   const baseline: RouteSpec = { route: 'baseline', what: 'one primary-key read, signed in', cookie: desk, next: () => ({ path: `/api/bench/baseline/${baselineId()}` }) };
   const specs: RouteSpec[] = [
-    { route: 'desk list', what: 'GET /api/requests?desk=mine&sort=due (section engineer, 100 projects)', cookie: desk, next: () => ({ path: '/api/requests?desk=mine&sort=due' }) },
-    { route: 'register search', what: 'GET /api/requests?q=… (central office, every project)', cookie: central, next: () => ({ path: `/api/requests?q=${encodeURIComponent(term())}` }) },
+    { route: 'desk list', what: `GET /api/requests?desk=mine&sort=due (section engineer on ${seed.deskProjects} projects)`, cookie: desk, next: () => ({ path: '/api/requests?desk=mine&sort=due' }) },
+    { route: 'register search', what: `GET /api/requests?q=… (central office on all ${seed.sizes.projects} projects, ${seed.searchTerms.length} search terms in turn)`, cookie: central, next: () => ({ path: `/api/requests?q=${encodeURIComponent(term())}` }) },
     { route: 'request detail', what: 'GET /api/requests/:id (50 trail events)', cookie: desk, next: () => ({ path: `/api/requests/${detailId()}` }) },
   ];
   const transitionSpec: RouteSpec = { route: 'transition', what: 'POST /api/requests/:id/events forward', cookie: transition, method: 'POST', next: nextMove };
