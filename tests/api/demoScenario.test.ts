@@ -3,6 +3,7 @@
 // S3 fake whose bytes match their recorded hashes, the mail delivered over SMTP, decision records
 // made, and a second load that adds nothing.
 import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { and, asc, count, eq, isNotNull } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -17,7 +18,7 @@ import { requestStates } from '../../shared/requests/states';
 import request from 'supertest';
 import { buildTestApp, type TestApp } from '../support/apiHarness';
 import { privateDatabase } from '../support/privateDatabase';
-import { fakesDir } from '../support/testSettings';
+import { fakesDir, repoRoot } from '../support/testSettings';
 
 const smtpPort = Number(process.env.TEST_API_SMTP_PORT) + 20;
 const catcherPort = Number(process.env.TEST_API_CATCHER_PORT) + 20;
@@ -193,6 +194,17 @@ describe('the demo scenario', () => {
     const items = desk.body.items as { title: string; overdue: boolean }[];
     // Routed to Ruth Caldera 14 days before the seed; the engineer of record has 10 days.
     expect(items.find((i) => i.title === 'Move deck construction joint CJ-2 closer to pier 1')?.overdue).toBe(true);
+  });
+
+  it('lets every person the README lists sign in, and the README lists every demo person', async () => {
+    const readme = readFileSync(join(repoRoot, 'README.md'), 'utf8');
+    const table = readme.slice(readme.indexOf('| sign in as |'), readme.indexOf('## Trying it'));
+    const listed = [...table.matchAll(/^\| `([^`]+@demo\.spanrelay\.test)` \|/gm)].map((m) => m[1]);
+    expect(new Set(listed)).toEqual(new Set(Object.values(demoPeople).map((p) => p.email)));
+    for (const email of listed) {
+      const res = await request(t.app).post('/api/auth/sign-in/email').set('origin', t.env.PUBLIC_URL).send({ email, password: demoPassword });
+      expect(res.status, email).toBe(200);
+    }
   });
 
   it('adds nothing when it is loaded a second time', async () => {
