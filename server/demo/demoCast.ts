@@ -44,9 +44,9 @@ export const demoProjects: Record<DemoProjectKey, DemoProjectFacts> = {
   },
   harrowRoad: {
     code: 'HR-0231',
-    name: 'Harrow Road Overpass over SR 9',
+    name: 'Harrowmere Road Overpass over SR 9',
     structureNumber: '27-0231',
-    featureCarried: 'County Road 12 (Harrow Road)',
+    featureCarried: 'County Road 12 (Harrowmere Road)',
     featureCrossed: 'State Route 9',
     county: 'Tallis County',
     contractNumber: 'C-27-2026-15',
@@ -58,17 +58,17 @@ export const demoProjects: Record<DemoProjectKey, DemoProjectFacts> = {
   },
   millRun: {
     code: 'MR-0409',
-    name: 'Mill Run Bridge, County Road 40',
+    name: 'Millbrack Run Bridge, County Road 40',
     structureNumber: '27-0409',
     featureCarried: 'County Road 40',
-    featureCrossed: 'Mill Run',
+    featureCrossed: 'Millbrack Run',
     county: 'Tallis County',
     contractNumber: 'C-27-2026-21',
     contractorFirm: 'Grennock Heavy Civil',
-    section: 'Dunnet Section',
+    section: 'Brackwater Section',
     federalAid: false,
-    structure: 'Single-span cast-in-place concrete slab, 44 ft; strip seals at both abutments',
-    spansFt: [44],
+    structure: 'Single-span cast-in-place concrete slab, 36 ft; strip seals at both abutments',
+    spansFt: [36],
   },
 };
 
@@ -99,7 +99,7 @@ export const demoPeople: Record<DemoPersonKey, DemoPerson> = {
   wes: { role: 'contractor', name: 'Wes Dunmore', organization: 'Lattimer-Oake Bridge Co.', email: 'wes.dunmore@demo.spanrelay.test', projects: ['harrowRoad'] },
   rosa: { role: 'contractor', name: 'Rosa Tennant', organization: 'Grennock Heavy Civil', email: 'rosa.tennant@demo.spanrelay.test', projects: ['millRun'] },
   priya: { role: 'section_engineer', name: 'Priya Halden', organization: agencyUnit('Tallis Section'), email: demoEmail('section_engineer'), projects: ['pellamCreek', 'harrowRoad'] },
-  owen: { role: 'section_engineer', name: 'Owen Brask', organization: agencyUnit('Dunnet Section'), email: 'owen.brask@demo.spanrelay.test', projects: ['millRun'] },
+  owen: { role: 'section_engineer', name: 'Owen Brask', organization: agencyUnit('Brackwater Section'), email: 'owen.brask@demo.spanrelay.test', projects: ['millRun'] },
   marcus: { role: 'central_office', name: 'Marcus Trell', organization: agencyUnit('Bridge Office'), email: demoEmail('central_office'), projects: allProjects },
   ruth: {
     role: 'engineer_of_record',
@@ -116,7 +116,7 @@ export const demoPeople: Record<DemoPersonKey, DemoPerson> = {
     projects: ['harrowRoad', 'millRun'],
   },
   tomas: { role: 'field_inspector', name: 'Tomas Reyl', organization: agencyUnit('Tallis Section'), email: demoEmail('field_inspector'), projects: ['pellamCreek', 'harrowRoad'] },
-  nell: { role: 'field_inspector', name: 'Nell Varga', organization: agencyUnit('Dunnet Section'), email: 'nell.varga@demo.spanrelay.test', projects: ['millRun'] },
+  nell: { role: 'field_inspector', name: 'Nell Varga', organization: agencyUnit('Brackwater Section'), email: 'nell.varga@demo.spanrelay.test', projects: ['millRun'] },
   june: { role: 'auditor', name: 'June Akers', organization: agencyUnit('Internal Review'), email: demoEmail('auditor'), projects: ['pellamCreek'] },
   sam: { role: 'admin', name: 'Sam Pellow', organization: demoAgency, email: demoEmail('admin'), projects: ['pellamCreek'] },
 };

@@ -11,11 +11,14 @@ import { createDraft, updateDraft } from '../requests/draftService';
 import { currentRevisionRow, requestRow } from '../requests/requestRepository';
 import type { ObjectStore } from '../storage/objectStore';
 import { addComment, applyEvent } from '../workflow/workflowService';
+import { produceDecisionRecord } from '../documents/decisionRecordJob';
 import { attachDemoFile } from './demoAttachments';
 import type { DemoPersonKey, DemoProjectKey } from './demoCast';
 import type { DemoClock } from './demoClock';
 import { makeDemoFile } from './demoFileRecipes';
 import type { RequestStory } from './storyTypes';
+
+const decisions = new Set(['approve', 'approve_with_conditions', 'reject']);
 
 export type StoryDeps = {
   db: Database;
@@ -47,6 +50,12 @@ export async function runStory(deps: StoryDeps, story: RequestStory): Promise<st
       await attachDemoFile(deps, actor, requestId, step.purpose ?? 'revision', await makeDemoFile(step.attach, fileContext(at, step.by)), at);
     } else if ('move' in step) {
       await move(actor, { ...step.move, version: await version() } as WorkflowEventInput, at);
+      if (decisions.has(step.move.type)) {
+        // Made a minute after the decision, as the worker would have; the job queued by the move
+        // then finds it and does nothing, so no record is dated the day the seed ran.
+        previous = new Date(at.getTime() + 60_000);
+        await produceDecisionRecord({ db, store: deps.store, publicUrl: deps.publicUrl }, requestId, actor.id, { at: previous });
+      }
     } else if ('route' in step) {
       await move(actor, { type: 'route', eorUserId: people[step.route].id, comment: step.comment, version: await version() }, at);
     } else if ('reassign' in step) {

@@ -9,7 +9,7 @@ import { queueMail } from '../mail/mailQueue';
 import { requestRecord } from '../requests/readService';
 import { membersWithRole, userById } from '../requests/requestRepository';
 import type { ObjectStore } from '../storage/objectStore';
-import { verifyTrail } from '../trail/trailChain';
+import { verifyTrail, type RecordedAt } from '../trail/trailChain';
 import { objectKeyFor } from '../requests/attachmentService';
 import { renderDecisionRecord } from './decisionRecord';
 
@@ -19,7 +19,13 @@ export async function queueDecisionRecord(tx: Transaction, requestId: string, de
   );
 }
 
-export async function produceDecisionRecord(deps: { db: Database; store: ObjectStore; publicUrl: string }, requestId: string, decidedById: string): Promise<void> {
+// `when.at` only from the demo seed, which makes each record on the day of its invented decision.
+export async function produceDecisionRecord(
+  deps: { db: Database; store: ObjectStore; publicUrl: string },
+  requestId: string,
+  decidedById: string,
+  when: RecordedAt = {},
+): Promise<void> {
   const { db, store } = deps;
   const [existing] = await db.select({ id: attachments.id }).from(attachments).where(and(eq(attachments.requestId, requestId), eq(attachments.purpose, 'decision_record')));
   if (existing) return;
@@ -29,7 +35,7 @@ export async function produceDecisionRecord(deps: { db: Database; store: ObjectS
   const pdf = await renderDecisionRecord({
     request,
     chain: chain.ok ? chain : { ok: false, events: request.trail.length, lastHash: request.trail.at(-1)?.hash ?? '' },
-    generatedAt: new Date(),
+    generatedAt: when.at ?? new Date(),
   });
   const key = objectKeyFor(request.project.id, requestId, request.currentRevision);
   await store.put(key, pdf, 'application/pdf', { 'original-name': `${request.number} decision record.pdf` });
@@ -47,6 +53,7 @@ export async function produceDecisionRecord(deps: { db: Database; store: ObjectS
         sizeBytes: pdf.length,
         sha256: createHash('sha256').update(pdf).digest('hex'),
         uploadedById: decidedById,
+        ...(when.at ? { uploadedAt: when.at } : {}),
       });
       const filer = await userById(tx, request.filedBy.id);
       const engineers = await membersWithRole(tx, request.project.id, 'section_engineer');

@@ -46,7 +46,7 @@ export async function sendDeskReminders(db: Database, publicUrl: string, now: Da
           `Request ${r.number}, "${r.title}", on ${projectName} has been at your desk for ${Math.floor(waitedDays)} days; the project allows ${due}.`,
           `It is: ${stateLabel(r.state)}.`,
           '',
-          'Please act on it, or tell the contractor and the section engineer when you will.',
+          `Please act on it, or tell ${desk === 'contractor' ? 'the section engineer' : desk === 'section_engineer' ? 'the contractor' : 'the contractor and the section engineer'} when you will.`,
           '',
           `Open the request: ${publicUrl}/requests/${r.id}`,
         ].join('\n'),

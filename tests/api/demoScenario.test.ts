@@ -82,6 +82,8 @@ describe('the demo scenario', () => {
       const filed = mine.map((r) => r.createdAt.getTime());
       expect(filed).toEqual([...filed].sort((x, y) => x - y));
     }
+    // The joint request's comments name the deck request by its number.
+    expect(rows.find((r) => r.number === 'PC-0114-003')?.title).toBe('Place the three-span deck in one continuous placement');
     for (const r of rows) {
       expect(await verifyTrail(t.db, r.id)).toMatchObject({ ok: true });
       const times = (await t.db.select({ at: trailEvents.createdAt }).from(trailEvents).where(eq(trailEvents.requestId, r.id)).orderBy(asc(trailEvents.seq))).map((e) => e.at.getTime());
@@ -107,7 +109,7 @@ describe('the demo scenario', () => {
     const plan = (single.results as { plan: { singlePlacement: { volumeCy: number; minInitialSetHr: number } } }).plan;
     expect(plan.singlePlacement.volumeCy).toBeCloseTo((455 * 44 * 0.75) / 27 + 45.5, 1);
     expect(plan.singlePlacement.minInitialSetHr).toBeCloseTo(601.6 / 60 + 2, 1);
-    // Harrow Road: 220 ft × 40 ft × 8.5 in + 0.08 cy/ft = 248.5 cy at 45 cy/h = 5.5 h + 2 h = 7.5 h,
+    // Harrowmere Road: 220 ft × 40 ft × 8.5 in + 0.08 cy/ft = 248.5 cy at 45 cy/h = 5.5 h + 2 h = 7.5 h,
     // more than the 6.0 h the Type B trial batch gave.
     const short = await checkOf('Place the two-span deck in one placement');
     expect(short.verdict).toBe('not_acceptable');
@@ -121,7 +123,7 @@ describe('the demo scenario', () => {
     // 176 ft (our continuous-beam module, itself tested against the AISC cases).
     expect((await checkOf('Move deck construction joint CJ-1 6 ft toward abutment 1')).verdict).toBe('acceptable');
     expect((await checkOf('Move deck construction joint CJ-2 closer to pier 1')).verdict).toBe('not_acceptable');
-    const returned = 'Move deck construction joint CJ-2 for the pier diaphragm pour';
+    const returned = 'Move deck construction joint CJ-2 toward the pier';
     expect((await checkOf(returned, 1)).verdict).toBe('not_acceptable');
     expect((await checkOf(returned, 2)).verdict).toBe('acceptable');
     expect((await byTitle(returned)).state).toBe('section_review');
@@ -158,7 +160,7 @@ describe('the demo scenario', () => {
   it('stores every file in the S3 fake with the bytes its recorded hash names', async () => {
     const rows = await t.db.select().from(attachments);
     expect(rows.length).toBeGreaterThanOrEqual(20);
-    expect(new Set(rows.map((a) => a.purpose))).toEqual(new Set(['revision', 'information_response', 'federal_concurrence', 'condition_evidence']));
+    expect(new Set(rows.map((a) => a.purpose))).toEqual(new Set(['revision', 'information_response', 'federal_concurrence', 'condition_evidence', 'decision_record']));
     for (const a of rows) {
       const object = await t.store.get(a.objectKey);
       const hash = createHash('sha256');
@@ -168,7 +170,22 @@ describe('the demo scenario', () => {
     }
   });
 
-  it('delivers the mail of every move over SMTP and makes the decision records', async () => {
+  it('makes each decision record a minute after its decision, not on the day the seed ran', async () => {
+    const records = await t.db.select().from(attachments).where(eq(attachments.purpose, 'decision_record'));
+    // Five decisions in the story: two approvals, two approvals with conditions, one rejection.
+    expect(records).toHaveLength(5);
+    for (const record of records) {
+      const [decision] = await t.pool
+        .query<{ created_at: Date }>(
+          `select created_at from trail_events where request_id = $1 and event_type in ('approve', 'approve_with_conditions', 'reject')`,
+          [record.requestId],
+        )
+        .then((r) => r.rows);
+      expect(record.uploadedAt.getTime() - decision!.created_at.getTime()).toBe(60_000);
+    }
+  });
+
+  it('delivers the mail of every move over SMTP, and the decision records’ too', async () => {
     const [queued] = await t.db.select({ n: count() }).from(mailOutbox);
     expect(queued!.n).toBeGreaterThan(40);
     await t.startJobs();
@@ -178,10 +195,10 @@ describe('the demo scenario', () => {
     const caught = readCaught(mailDir);
     expect(caught.some((m) => m.to.includes(demoPeople.ruth.email) && m.subject.includes('PC-0114'))).toBe(true);
     expect(caught.some((m) => m.to.includes(demoPeople.wes.email) && m.subject.includes('HR-0231'))).toBe(true);
-    // Five decisions in the story: two approvals, two approvals with conditions, one rejection.
-    await expect
-      .poll(async () => (await t.db.select({ n: count() }).from(attachments).where(eq(attachments.purpose, 'decision_record')))[0]!.n, { timeout: 60_000, interval: 500 })
-      .toBe(5);
+    expect(caught.filter((m) => m.subject.endsWith('decision record ready')).length).toBeGreaterThanOrEqual(5);
+    // The jobs the decisions queued found their records made and added none.
+    const [records] = await t.db.select({ n: count() }).from(attachments).where(eq(attachments.purpose, 'decision_record'));
+    expect(records!.n).toBe(5);
     await t.stopJobs();
   }, 150_000);
 

@@ -1,4 +1,4 @@
-// Harrow Road Overpass (HR-0231): two prestressed concrete girder spans of 110 ft made continuous
+// Harrowmere Road Overpass (HR-0231): two prestressed concrete girder spans of 110 ft made continuous
 // for live load at the pier, compression seals at both abutments; a federal-aid project, so central
 // office classifies each change before it is decided. Lattimer-Oake Bridge Co. build it; Ines
 // Marwood, P.E., of the agency's design unit is the engineer of record. All invented.
@@ -20,7 +20,7 @@ export function harrowRoadStories(cal: StoryCalendar): RequestStory[] {
       body: {
         type: 'construction_joint_relocation',
         title: 'Move deck construction joint CJ-1 6 ft toward abutment 1',
-        location: { span: '1', description: 'Transverse deck construction joint CJ-1 in span 1' },
+        location: { span: '1', description: 'Transverse deck construction joint CJ-1' },
         planSheets: ['B-11'],
         reason: 'The deck drain at 70 ft falls on the joint line of sheet B-11; the joint would cut the drain’s reinforcement frame.',
         proposedChange: 'Place CJ-1 at 64 ft from abutment 1 instead of 70 ft, clear of the drain, roughened, with the longitudinal bars continuous through it.',
@@ -59,10 +59,10 @@ export function harrowRoadStories(cal: StoryCalendar): RequestStory[] {
           by: 'ines',
           move: {
             type: 'approve_with_conditions',
-            comment: 'Approved: 64 ft stays in the positive-moment region of span 1, 18.5 ft from the inflection point.',
+            comment: 'Approved: 64 ft stays 18.5 ft short of the 82.5 ft inflection point the check shows, clear of the continuity region over the pier.',
             conditions: [
-              { text: 'Roughen the hardened joint face to about 1/4 in amplitude and clean it before the second placement.', dueBefore: 'before the second placement' },
-              { text: 'Carry the longitudinal deck bars through the joint with no lap splice within 2 ft of it.', dueBefore: 'before the first placement' },
+              { text: 'Show CJ-1 at 64 ft and the DD-3 drain frame on the deck reinforcement shop drawing.', dueBefore: 'before the deck reinforcement is placed' },
+              { text: 'Carry the longitudinal deck bars through the joint with no lap splice within 2 ft of it.', dueBefore: 'at the deck reinforcement inspection' },
             ],
           },
         },
@@ -70,18 +70,26 @@ export function harrowRoadStories(cal: StoryCalendar): RequestStory[] {
           on: { daysAgo: 40, at: '07:50' },
           by: 'tomas',
           satisfy: {
-            seq: 2,
-            note: 'Checked the bulkhead before the first placement: bars continuous, nearest lap 4 ft 6 in from the joint.',
-            evidence: { make: 'photo', fileName: 'CJ-1 bulkhead, bars through.jpg', subject: 'bulkhead_with_dowels', seed: 2311 },
+            seq: 1,
+            note: 'Shop drawing R-4 rev B shows CJ-1 at 64 ft and the DD-3 drain frame; checked against the plan sheets.',
+            evidence: {
+              make: 'letter',
+              fileName: 'Transmittal, shop drawing R-4 rev B.pdf',
+              letterhead: contractorLetterhead,
+              to: ['Marrowfield State Highway Department', 'Tallis Section, Attn: Tomas Reyl'],
+              subject: 'Transmittal: deck reinforcement shop drawing R-4 rev B, Harrowmere Road Overpass',
+              paragraphs: ['Enclosed is revision B of deck reinforcement shop drawing R-4, showing construction joint CJ-1 at 64 ft from abutment 1 and the frame of deck drain DD-3 at 70 ft, as approved under HR-0231-001.'],
+              signature: ['Wes Dunmore', 'Project engineer, Lattimer-Oake Bridge Co.'],
+            },
           },
         },
         {
           on: { daysAgo: 37, at: '06:40' },
           by: 'tomas',
           satisfy: {
-            seq: 1,
-            note: 'Joint face roughened by needle gun and washed; amplitude checked with a gauge at six places.',
-            evidence: { make: 'photo', fileName: 'CJ-1 roughened face.jpg', subject: 'roughened_joint', seed: 2312 },
+            seq: 2,
+            note: 'Checked the span 1 deck reinforcement: bars continuous through the CJ-1 line at 64 ft, nearest lap 4 ft 6 in from it.',
+            evidence: { make: 'photo', fileName: 'CJ-1 line, bars through.jpg', subject: 'rebar_mat', seed: 2312 },
           },
         },
       ],
@@ -92,18 +100,18 @@ export function harrowRoadStories(cal: StoryCalendar): RequestStory[] {
       filedOn: { daysAgo: 12, at: '08:15' },
       body: {
         type: 'construction_joint_relocation',
-        title: 'Move deck construction joint CJ-2 for the pier diaphragm pour',
-        location: { span: '1', description: 'Transverse deck construction joint CJ-2 near the pier' },
+        title: 'Move deck construction joint CJ-2 toward the pier',
+        location: { span: '2', description: 'Transverse deck construction joint CJ-2' },
         planSheets: ['B-11', 'B-12'],
-        reason: 'Placing the pier diaphragm with the span 1 deck saves a day of pump time and a separate diaphragm placement.',
-        proposedChange: 'Move CJ-2 from 40 ft past the pier (150 ft) to 15 ft before the pier (95 ft from abutment 1).',
+        reason: 'The pier placement (CJ-1 to CJ-2) goes in under a night closure of SR 9; ending it 25 ft nearer the pier lets it finish before the closure ends.',
+        proposedChange: 'Move CJ-2 from 40 ft past the pier (150 ft from abutment 1) to 15 ft past it (125 ft).',
         neededBy: cal.date(21),
-        costImpact: { kind: 'credit', amountUsd: 4200 },
-        contractTimeImpactDays: -1,
+        costImpact: { kind: 'none' },
+        contractTimeImpactDays: 0,
         element: 'deck',
         spansFt,
         plannedLocation: { description: '40 ft past the pier (sheet B-11)', atFt: 150 },
-        proposedLocation: { description: '15 ft before the pier', atFt: 95 },
+        proposedLocation: { description: '15 ft past the pier', atFt: 125 },
         preparation: { roughened: true, keyed: false, waterstop: false },
         plane: 'transverse',
       },
@@ -118,9 +126,9 @@ export function harrowRoadStories(cal: StoryCalendar): RequestStory[] {
             title: 'Deck construction joint CJ-2: proposed location',
             marks: [
               { atFt: 150, label: 'CJ-2 planned', kind: 'planned' },
-              { atFt: 95, label: 'CJ-2 proposed', kind: 'proposed' },
+              { atFt: 125, label: 'CJ-2 proposed', kind: 'proposed' },
             ],
-            notes: ['Pier diaphragm placed with the span 1 deck.'],
+            notes: ['Pier placement from CJ-1 to CJ-2 under one night closure of SR 9.'],
           },
         },
         { on: { daysAgo: 11, at: '14:00' }, by: 'wes', move: { type: 'submit' } },
@@ -130,7 +138,7 @@ export function harrowRoadStories(cal: StoryCalendar): RequestStory[] {
           move: {
             type: 'return_for_revision',
             comment:
-              'Returned: at 95 ft the joint is 15 ft from the pier, inside the negative-moment region (the check puts the inflection point at 82.5 ft). Move it into span 1 clear of the tension zone, or keep the plans’ location.',
+              'Returned: at 125 ft the joint is 15 ft past the pier, inside the negative-moment region (the check puts the inflection point at 137.5 ft). Move it into span 2 clear of the tension zone, or keep the plans’ location.',
           },
         },
         {
@@ -138,10 +146,8 @@ export function harrowRoadStories(cal: StoryCalendar): RequestStory[] {
           by: 'wes',
           revise: (body) => ({
             ...(body as JointBody),
-            proposedChange: 'Move CJ-2 from 40 ft past the pier (150 ft) to 76 ft from abutment 1, in the positive-moment region of span 1; the pier diaphragm is placed with the span 2 deck as on the plans.',
-            proposedLocation: { description: '76 ft from abutment 1', atFt: 76 },
-            costImpact: { kind: 'none' },
-            contractTimeImpactDays: 0,
+            proposedChange: 'Move CJ-2 from 40 ft past the pier (150 ft) to 34 ft past it (144 ft), in the positive-moment region of span 2; the pier placement still finishes within the night closure.',
+            proposedLocation: { description: '34 ft past the pier', atFt: 144 },
           }),
         },
         {
@@ -151,18 +157,18 @@ export function harrowRoadStories(cal: StoryCalendar): RequestStory[] {
             make: 'sketch',
             fileName: 'SK-4 rev 2 CJ-2 relocation.pdf',
             sheet: 'SK-4 rev 2',
-            title: 'Deck construction joint CJ-2: revised location in span 1',
+            title: 'Deck construction joint CJ-2: revised location in span 2',
             marks: [
               { atFt: 150, label: 'CJ-2 planned', kind: 'planned' },
-              { atFt: 76, label: 'CJ-2 proposed', kind: 'proposed' },
+              { atFt: 144, label: 'CJ-2 proposed', kind: 'proposed' },
             ],
-            notes: ['Revision 2: joint moved out of the negative-moment region over the pier.', 'Pier diaphragm placed with the span 2 deck as on the plans.'],
+            notes: ['Revision 2: joint moved out of the negative-moment region over the pier.', 'Pier placement from CJ-1 to CJ-2 under one night closure of SR 9.'],
           },
         },
         {
           on: { daysAgo: 3, at: '15:30' },
           by: 'wes',
-          move: { type: 'resubmit', comment: 'Revision 2 moves CJ-2 to 76 ft from abutment 1, in the positive-moment region of span 1. Sketch SK-4 rev 2 attached.' },
+          move: { type: 'resubmit', comment: 'Revision 2 moves CJ-2 to 144 ft from abutment 1 (34 ft past the pier), in the positive-moment region of span 2. Sketch SK-4 rev 2 attached.' },
         },
       ],
     },
@@ -205,9 +211,9 @@ export function harrowRoadStories(cal: StoryCalendar): RequestStory[] {
           attach: {
             make: 'letter',
             fileName: 'H-3 time of setting report.pdf',
-            letterhead: ['Harwell Ready Mix', 'Quality Control Laboratory'],
+            letterhead: ['Tallis Ready Mix', 'Quality Control Laboratory'],
             to: contractorLetterhead,
-            subject: 'Time of setting of trial batch H-3 (ASTM C403), Harrow Road Overpass deck mix',
+            subject: 'Time of setting of trial batch H-3 (ASTM C403), Harrowmere Road Overpass deck mix',
             paragraphs: ['Trial batch H-3 of the deck mix was made with the Type B retarder at 4 oz/cwt.'],
             table: {
               caption: 'Trial batch H-3',
@@ -246,9 +252,9 @@ export function harrowRoadStories(cal: StoryCalendar): RequestStory[] {
               fileName: 'Federal concurrence, HR-0231 deck placement.pdf',
               letterhead: ['Federal oversight agency', 'Marrowfield Division Office'],
               to: ['Marrowfield State Highway Department', 'Bridge Office, Attn: Marcus Trell'],
-              subject: 'Concurrence in a major change: Harrow Road Overpass, single deck placement',
+              subject: 'Concurrence in a major change: Harrowmere Road Overpass, single deck placement',
               paragraphs: [
-                'We have reviewed the proposed change to the deck placement sequence of the Harrow Road Overpass and concur in it as a major change, subject to the engineer of record’s approval of the placement and set-time requirements.',
+                'We have reviewed the proposed change to the deck placement sequence of the Harrowmere Road Overpass and concur in it as a major change, subject to the engineer of record’s approval of the placement and set-time requirements.',
                 'This concurrence does not relieve the engineer of record of the design decision.',
               ],
               signature: ['Helena Strand', 'Division bridge engineer'],
@@ -279,10 +285,10 @@ export function harrowRoadStories(cal: StoryCalendar): RequestStory[] {
           attach: {
             make: 'letter',
             fileName: 'SCC mix design SCC-5.pdf',
-            letterhead: ['Harwell Ready Mix', 'Quality Control Laboratory'],
+            letterhead: ['Tallis Ready Mix', 'Quality Control Laboratory'],
             to: contractorLetterhead,
             subject: 'Mix design SCC-5, self-consolidating concrete',
-            paragraphs: ['Proposed self-consolidating mix for the pier diaphragm of the Harrow Road Overpass.'],
+            paragraphs: ['Proposed self-consolidating mix for the pier diaphragm of the Harrowmere Road Overpass.'],
             table: {
               caption: 'SCC-5',
               rows: [

@@ -1,9 +1,9 @@
-// Mill Run Bridge (MR-0409): a single 44 ft cast-in-place concrete slab span with strip seals at
-// both abutments, in the Dunnet Section. Grennock Heavy Civil build it. All invented.
+// Millbrack Run Bridge (MR-0409): a single 36 ft cast-in-place concrete slab span with strip seals
+// at both abutments, in the Brackwater Section. Grennock Heavy Civil build it. All invented.
 import type { RequestBody } from '../../../shared/requests/requestBody';
 import type { RequestStory, StoryCalendar } from '../storyTypes';
 
-const contractorLetterhead = ['Grennock Heavy Civil', '18 Weir Street, Dunnet'];
+const contractorLetterhead = ['Grennock Heavy Civil', '18 Weir Street, Brackwater'];
 
 type JointBody = Extract<RequestBody, { type: 'construction_joint_relocation' }>;
 
@@ -24,10 +24,10 @@ export function millRunStories(cal: StoryCalendar): RequestStory[] {
         costImpact: { kind: 'none' },
         contractTimeImpactDays: 0,
         jointLocation: 'Abutments 1 and 2',
-        specified: { kind: 'strip_seal', product: 'Strip seal per sheet M-6', movementCapacityIn: 2, minOpeningIn: 0.75, maxOpeningIn: 2.75 },
+        specified: { kind: 'strip_seal', product: 'Strip seal per sheet M-6', movementCapacityIn: 0.5, minOpeningIn: 1.25, maxOpeningIn: 1.75 },
         substitute: { kind: 'strip_seal', product: 'Pellquist PS-300 strip seal', movementCapacityIn: 2.5, minOpeningIn: 0.5, maxOpeningIn: 3 },
         // The slab is held at mid-length, so each joint takes the movement of half of it.
-        contributingLengthFt: 22,
+        contributingLengthFt: 18,
         material: 'concrete',
         climate: 'moderate',
         installTempF: 65,
@@ -111,7 +111,7 @@ export function millRunStories(cal: StoryCalendar): RequestStory[] {
         location: { description: 'Slope protection at both abutments' },
         planSheets: ['M-2'],
         reason: 'The quarry named in the special provisions has closed its Class II riprap line; the nearest source produces Class III.',
-        proposedChange: 'Place Class III riprap (D50 of 15 in) 24 in thick on the geotextile in place of Class II (D50 of 12 in) 18 in thick.',
+        proposedChange: 'Place Class III riprap (D50 of 15 in, D100 of 30 in) 30 in thick on the geotextile in place of Class II (D50 of 12 in) 18 in thick.',
         neededBy: cal.date(25),
         costImpact: { kind: 'added_cost', amountUsd: 6400 },
         contractTimeImpactDays: 0,
@@ -123,10 +123,10 @@ export function millRunStories(cal: StoryCalendar): RequestStory[] {
           attach: {
             make: 'letter',
             fileName: 'Class III riprap gradation.pdf',
-            letterhead: ['Dunnet Aggregates', 'Quarry laboratory'],
+            letterhead: ['Brackwater Aggregates', 'Quarry laboratory'],
             to: contractorLetterhead,
             subject: 'Gradation of Class III riprap, lot 26-114',
-            paragraphs: ['Gradation of the stockpile sampled for the Mill Run Bridge slope protection.'],
+            paragraphs: ['Gradation of the stockpile sampled for the Millbrack Run Bridge slope protection.'],
             table: {
               caption: 'Lot 26-114',
               rows: [
@@ -158,7 +158,7 @@ export function millRunStories(cal: StoryCalendar): RequestStory[] {
         neededBy: cal.date(-25),
         costImpact: { kind: 'added_cost', amountUsd: 5200 },
         contractTimeImpactDays: 7,
-        deck: { spansFt: [44], deckWidthFt: 34, slabThicknessIn: 18 },
+        deck: { spansFt: [36], deckWidthFt: 34, slabThicknessIn: 22.5 },
         plannedSequence: 'One placement of the full slab (sheet M-3).',
         proposedSequence: {
           kind: 'revised_sequence',
@@ -175,7 +175,7 @@ export function millRunStories(cal: StoryCalendar): RequestStory[] {
             fileName: 'SK-1 slab placement in halves.pdf',
             sheet: 'SK-1',
             title: 'Slab placement in two halves along the bridge',
-            segments: [{ fromFt: 0, toFt: 44, order: 1 }],
+            segments: [{ fromFt: 0, toFt: 36, order: 1 }],
             notes: ['Upstream half placed first, downstream half about a week later.', 'Longitudinal construction joint on the crown line.', 'One lane of County Road 40 open throughout.'],
           },
         },
@@ -199,7 +199,7 @@ export function millRunStories(cal: StoryCalendar): RequestStory[] {
             fileName: 'Staging and splice details.pdf',
             letterhead: contractorLetterhead,
             to: ['Marrowfield State Highway Department', 'Attn: Ines Marwood, P.E.'],
-            subject: 'Mill Run Bridge: traffic staging and splices across the longitudinal joint',
+            subject: 'Millbrack Run Bridge: traffic staging and splices across the longitudinal joint',
             paragraphs: [
               'Stage 1 keeps the downstream lane open while the upstream half is formed and placed; stage 2 shifts traffic to the new half once it reaches 3,000 psi.',
               'The transverse bottom and top bars are #5 bars lapped 36 in across the joint, staggered so that no more than half are spliced at one section.',

@@ -101,7 +101,7 @@ export function pellamCreekStories(cal: StoryCalendar): RequestStory[] {
                 dueBefore: 'at least 7 days before the placement',
               },
               {
-                text: 'Keep a standby pump and a bulkhead with dowels ready at the emergency joint location (70 ft from abutment 1) throughout the placement, and keep a placement log.',
+                text: 'Keep a standby pump on site and bulkheads with dowels ready for an emergency joint in each positive-moment zone the check shows (0–104, 176–279 and 351–455 ft from abutment 1), at least 10 ft from an inflection point; keep a placement log.',
                 dueBefore: 'on the day of the placement',
               },
               {
@@ -146,10 +146,10 @@ export function pellamCreekStories(cal: StoryCalendar): RequestStory[] {
       body: {
         type: 'construction_joint_relocation',
         title: 'Move deck construction joint CJ-2 closer to pier 1',
-        location: { span: '2', description: 'Transverse deck construction joint CJ-2 in span 2' },
+        location: { span: '2', description: 'Transverse deck construction joint CJ-2' },
         planSheets: ['S-14'],
         reason:
-          'The finishing machine rail supports cannot be set at the CJ-2 station on sheet S-14: it falls over the utility bay, where the overhang brackets are spaced for the conduit run.',
+          'The finishing machine rail supports cannot be set at the CJ-2 station on sheet S-14: it falls over the utility bay, where the overhang brackets are spaced for the conduit run. It applies if the single placement (PC-0114-003) is not approved or is called off; the five-stage sequence of sheet S-14 then governs.',
         proposedChange: 'Move CJ-2 from 50 ft to 25 ft past pier 1 (190 ft to 165 ft from abutment 1), roughened and doweled as on sheet S-15.',
         neededBy: cal.date(30),
         costImpact: { kind: 'none' },
@@ -188,7 +188,8 @@ export function pellamCreekStories(cal: StoryCalendar): RequestStory[] {
         {
           on: { daysAgo: 4, at: '14:00' },
           by: 'ruth',
-          comment: 'Looking at alternatives: a joint about 60 ft past pier 1 may clear both the utility bay and the tension region over the pier. I will call the contractor’s engineer.',
+          comment:
+            'PC-0114-003 is approved, but this joint stays the fallback if the single placement is called off. A joint about 60 ft past pier 1 (200 ft) clears both the utility bay and the tension region (inflection point at 176.3 ft). I will call the contractor’s engineer.',
         },
       ],
     },
@@ -280,7 +281,7 @@ export function pellamCreekStories(cal: StoryCalendar): RequestStory[] {
           attach: {
             make: 'letter',
             fileName: 'Anchor bolt galvanizing certificate.pdf',
-            letterhead: ['Orland Galvanizing Works', '7 Kiln Road, Harwick Mills'],
+            letterhead: ['Kestrow Galvanizing Works', '7 Kiln Road, Pellam Falls'],
             to: ['Corbel & Fane Constructors', 'Attn: Dana Ostrow'],
             subject: 'Certificate of hot-dip galvanizing, anchor bolts for Pellam Creek Bridge',
             paragraphs: ['We certify that the anchor bolts listed below were hot-dip galvanized to ASTM F2329 and that the coating thickness was measured on each lot.'],
