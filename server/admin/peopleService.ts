@@ -4,6 +4,7 @@ import type { PersonUpdate, ProjectSettings } from '../../shared/people/schemas'
 import type { AdminProject, PersonRow } from '../../shared/people/types';
 import type { Actor } from '../../shared/requests/types';
 import type { Role } from '../../shared/roles';
+import { forgetSessionsOf } from '../auth/sessionCache';
 import { HttpError } from '../http/errors';
 import { findPerson, updatePerson } from './peopleRepository';
 import { addMember, findProject, removeMember, setDeskDueDays } from './projectAdminRepository';
@@ -30,6 +31,8 @@ export async function changePerson(db: Database, actor: Actor, id: string, updat
   if (update.role !== undefined) change.role = update.role;
   if (update.organization !== undefined) change.organization = update.organization || null;
   await updatePerson(db, id, change);
+  // The person's open sessions act with the new role from their very next request.
+  forgetSessionsOf(id);
   return personOr404(db, id);
 }
 

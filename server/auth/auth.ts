@@ -3,6 +3,7 @@
 import { betterAuth } from 'better-auth';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
 import { APIError, createAuthMiddleware, getSessionFromCtx } from 'better-auth/api';
+import { forgetAllSessions } from './sessionCache';
 import { createSignInThrottle } from './signInThrottle';
 import type { Database } from '../../db/client';
 import * as schema from '../../db/schema';
@@ -15,6 +16,11 @@ import { passwordResetMail, resetLink } from '../people/accountMail';
 export const clientAddressHeader = 'x-spanrelay-client-address';
 
 const resetValidSeconds = 60 * 60;
+
+// better-auth calls that neither end a session nor change a person. After any other (sign-out,
+// password reset, revoking sessions…) this process forgets every session it remembers, so the
+// very next request is checked against the database.
+const leavesSessionsAlone = new Set(['/sign-in/email', '/get-session', '/request-password-reset', '/ok', '/error']);
 
 // Without a mailer of the process's own, each reset opens and closes its own SMTP connection.
 function oneOffMailer(env: ServerEnv): Mailer {
@@ -83,6 +89,8 @@ export function createAuth(db: Database, env: ServerEnv, mailer: Mailer = oneOff
         }
       }),
       after: createAuthMiddleware(async (ctx) => {
+        // Runs once the call's own writes are done and before its answer is sent.
+        if (!leavesSessionsAlone.has(ctx.path)) forgetAllSessions();
         if (ctx.path !== '/sign-in/email') return;
         const { email, address } = signInKeys(ctx);
         if (ctx.context.returned instanceof APIError) throttle.recordFailure(email, address);

@@ -6,6 +6,7 @@ import { randomUUID } from 'node:crypto';
 import type { Database, Transaction } from '../../db/client';
 import { accounts, users } from '../../db/schema';
 import type { Role } from '../../shared/roles';
+import { forgetSessionsOf } from '../auth/sessionCache';
 
 export type NewAccount = { email: string; name: string; role: Role; organization: string | null; password: string };
 
@@ -13,13 +14,16 @@ export type NewAccount = { email: string; name: string; role: Role; organization
 export async function upsertAccount(db: Database, input: NewAccount): Promise<string> {
   const email = input.email.toLowerCase();
   const passwordHash = await hashPassword(input.password);
-  return db.transaction(async (tx) => {
+  const userId = await db.transaction(async (tx) => {
     const [existing] = await tx.select({ id: users.id }).from(users).where(eq(users.email, email));
     if (!existing) return insertAccount(tx, { ...input, email }, passwordHash);
     await tx.update(users).set({ name: input.name, role: input.role, organization: input.organization, updatedAt: new Date() }).where(eq(users.id, existing.id));
     await tx.update(accounts).set({ password: passwordHash, updatedAt: new Date() }).where(eq(accounts.userId, existing.id));
     return existing.id;
   });
+  // After commit: a session lookup between the forgetting and the commit would read the old row.
+  forgetSessionsOf(userId);
+  return userId;
 }
 
 // A new account inside the caller's transaction (an accepted invitation); the unique e-mail

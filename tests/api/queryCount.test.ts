@@ -1,8 +1,11 @@
 // How many database queries a read makes: a fixed number, whatever the page size or the length of
 // the trail (no query per row). Every statement sent by any pg client in this test process is
 // counted, so the sign-in service's own session lookup is measured too and taken off with /api/me.
+// Each read is counted with the session not remembered (server/auth/sessionCache.ts), so the
+// lookup is part of every count and the difference is the read's own.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import pg from 'pg';
+import { forgetAllSessions } from '../../server/auth/sessionCache';
 import { buildTestApp, createScenario, signIn, type TestApp } from '../support/apiHarness';
 import { agentsFor, otherDeviationBody, requestAt } from '../support/requestFixtures';
 
@@ -16,6 +19,7 @@ pg.Client.prototype.query = function countedQuery(this: pg.Client, ...args: unkn
 type Agent = Awaited<ReturnType<typeof signIn>>;
 
 async function queriesOf(agent: Agent, path: string): Promise<number> {
+  forgetAllSessions();
   statements = 0;
   const res = await agent.get(path);
   expect(res.status, res.text).toBe(200);
