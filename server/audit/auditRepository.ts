@@ -1,7 +1,7 @@
 // Finding requests by their trail: who acted in it, when, and how it was decided. Most recent
 // activity first; the cursor is the last hit's (last event time, id). Trail times are stored to the
 // millisecond, so a JavaScript Date carries a cursor time exactly.
-import { and, count, desc, eq, exists, gte, ilike, inArray, isNull, lt, max, or, sql, type SQL } from 'drizzle-orm';
+import { and, count, desc, eq, exists, gte, ilike, inArray, isNull, lt, max, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { Database } from '../../db/client';
 import { changeRequests, projects, trailEvents, users } from '../../db/schema';
 import type { TrailDecision, TrailSearchHit } from '../../shared/trail/trailSearch';
@@ -9,6 +9,8 @@ import type { TrailDecision, TrailSearchHit } from '../../shared/trail/trailSear
 export type TrailSearchFilter = {
   // Projects the reader may see; undefined means every project (auditors).
   projectIds?: string[];
+  // Requests still being drafted are the contractor's own (server/requests/access.ts).
+  withDrafts: boolean;
   number?: string;
   structure?: string;
   person?: string;
@@ -41,6 +43,7 @@ export async function searchTrails(db: Database, f: TrailSearchFilter): Promise<
 
   const where: (SQL | undefined)[] = [];
   if (f.projectIds) where.push(f.projectIds.length ? inArray(changeRequests.projectId, f.projectIds) : sql`false`);
+  if (!f.withDrafts) where.push(ne(changeRequests.state, 'drafting'));
   if (f.number) where.push(ilike(changeRequests.number, contains(f.number)));
   if (f.structure) where.push(ilike(projects.structureNumber, contains(f.structure)));
   if (f.person) where.push(eventOfRequest(db, or(ilike(users.name, contains(f.person)), ilike(users.email, contains(f.person)))));

@@ -6,7 +6,7 @@ import { boundsOf, type TrailSearchPage, type TrailSearchQuery } from '../../sha
 import type { Actor, RequestSummary } from '../../shared/requests/types';
 import { renderDecisionRecord } from '../documents/decisionRecord';
 import { HttpError } from '../http/errors';
-import { mayRead, readableProjectIds } from '../requests/access';
+import { mayReadRequest, readableProjectIds, seesDrafts } from '../requests/access';
 import { requestRecord } from '../requests/readService';
 import { requestSummary, trailOf } from '../requests/requestRepository';
 import { hashedEventOf, verifyTrail } from '../trail/trailChain';
@@ -33,6 +33,7 @@ function decodeCursor(cursor: string): { lastEventAt: Date; id: string } {
 export async function searchFor(db: Database, actor: Actor, q: TrailSearchQuery): Promise<TrailSearchPage> {
   const hits = await searchTrails(db, {
     projectIds: await readableProjectIds(db, actor),
+    withDrafts: seesDrafts(actor),
     number: q.number,
     structure: q.structure,
     person: q.person,
@@ -50,7 +51,7 @@ export async function searchFor(db: Database, actor: Actor, q: TrailSearchQuery)
 // Same answer for "missing" and "not yours", so ids of other projects cannot be probed.
 async function readable(db: Database, actor: Actor, requestId: string): Promise<RequestSummary> {
   const summary = await requestSummary(db, requestId);
-  if (!summary || !(await mayRead(db, actor, summary.project.id))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+  if (!summary || !(await mayReadRequest(db, actor, { projectId: summary.project.id, state: summary.state }))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
   return summary;
 }
 

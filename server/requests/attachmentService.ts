@@ -13,7 +13,7 @@ import type { RecordedAt } from '../trail/trailChain';
 import type { StoredUpload } from '../storage/streamingUploadStorage';
 import { previewableTypes } from '../storage/acceptedFileTypes';
 import sharp from 'sharp';
-import { mayRead } from './access';
+import { mayReadRequest } from './access';
 import { attachmentOfRequest, attachmentWithProject, requestRow, toAttachmentSummary } from './requestRepository';
 
 export type AttachmentPurpose = (typeof attachmentPurposes)[number];
@@ -34,7 +34,7 @@ export function objectKeyFor(projectId: string, requestId: string, revision: num
 // Decided before a byte is read: may this person add this kind of file to this request now?
 export async function authorizeUpload(db: Database, actor: Actor, requestId: string, purpose: UploadPurpose) {
   const row = await requestRow(db, requestId);
-  if (!row || !(await mayRead(db, actor, row.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+  if (!row || !(await mayReadRequest(db, actor, row.request))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
   const rule = uploadRules[purpose];
   if (actor.role !== rule.role || !(await isProjectMember(db, row.request.projectId, actor.id))) throw new HttpError(403, 'not_your_upload', rule.what);
   if (!rule.states.includes(row.request.state)) throw new HttpError(409, 'not_now', rule.what);
@@ -85,7 +85,7 @@ export async function recordUploads(
 // Only a draft's own files can be removed; a submitted revision's are part of the record.
 export async function removeDraftAttachment(deps: { db: Database; store: ObjectStore }, actor: Actor, requestId: string, attachmentId: string) {
   const row = await requestRow(deps.db, requestId);
-  if (!row || !(await mayRead(deps.db, actor, row.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+  if (!row || !(await mayReadRequest(deps.db, actor, row.request))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
   const a = await attachmentOfRequest(deps.db, requestId, attachmentId);
   if (!a) throw new HttpError(404, 'attachment_not_found', 'No attachment of this request has that id.');
   if (actor.role !== 'contractor' || !(await isProjectMember(deps.db, row.request.projectId, actor.id))) {
@@ -99,7 +99,7 @@ export async function removeDraftAttachment(deps: { db: Database; store: ObjectS
 
 export async function openAttachment(deps: { db: Database; store: ObjectStore }, actor: Actor, attachmentId: string) {
   const row = await attachmentWithProject(deps.db, attachmentId);
-  if (!row || !(await mayRead(deps.db, actor, row.projectId))) throw new HttpError(404, 'attachment_not_found', 'No attachment you can see has that id.');
+  if (!row || !(await mayReadRequest(deps.db, actor, row))) throw new HttpError(404, 'attachment_not_found', 'No attachment you can see has that id.');
   try {
     return { attachment: row.attachment, object: await deps.store.get(row.attachment.objectKey) };
   } catch {
@@ -110,7 +110,7 @@ export async function openAttachment(deps: { db: Database; store: ObjectStore },
 // A resized JPEG of a photo or image, made once and kept beside the original in the store.
 export async function attachmentPreview(deps: { db: Database; store: ObjectStore }, actor: Actor, attachmentId: string): Promise<Buffer> {
   const row = await attachmentWithProject(deps.db, attachmentId);
-  if (!row || !(await mayRead(deps.db, actor, row.projectId))) throw new HttpError(404, 'attachment_not_found', 'No attachment you can see has that id.');
+  if (!row || !(await mayReadRequest(deps.db, actor, row))) throw new HttpError(404, 'attachment_not_found', 'No attachment you can see has that id.');
   if (!previewableTypes.has(row.attachment.contentType)) throw new HttpError(404, 'no_preview', 'There is no preview of this kind of file; open it instead.');
   const previewKey = `${row.attachment.objectKey}.preview.jpg`;
   try {

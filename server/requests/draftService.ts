@@ -9,7 +9,7 @@ import type { Actor } from '../../shared/requests/types';
 import { HttpError } from '../http/errors';
 import { isProjectMember } from '../projects/projectRepository';
 import { appendTrailEvent, type RecordedAt } from '../trail/trailChain';
-import { mayRead } from './access';
+import { mayReadRequest } from './access';
 import { lockRequest, projectById, takeRequestNumber } from './requestRepository';
 
 const editableStates = ['drafting', 'revising'];
@@ -46,7 +46,7 @@ export async function updateDraft(db: Database, actor: Actor, requestId: string,
   await db.transaction(async (tx) => {
     const locked = await lockRequest(tx, requestId);
     // An auditor sees every request, so for them it exists: refused (403), not hidden (404).
-    if (!locked || !(await mayRead(tx, actor, locked.request.projectId))) {
+    if (!locked || !(await mayReadRequest(tx, actor, locked.request))) {
       throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
     }
     const r = locked.request;

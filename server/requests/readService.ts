@@ -10,7 +10,7 @@ import { availableEvents } from '../../shared/workflow/evaluate';
 import type { WorkflowFacts } from '../../shared/workflow/rules';
 import { HttpError } from '../http/errors';
 import { verifyTrail } from '../trail/trailChain';
-import { mayRead } from './access';
+import { mayReadRequest, seesDrafts } from './access';
 import {
   attachmentsOf,
   conditionsOf,
@@ -67,6 +67,7 @@ function filterFor(actor: Actor, q: RequestFilterQuery): RequestFilter {
   };
   if (q.desk === 'mine') narrow(statesAtDesk(actor.role));
   if (q.atDesk) narrow(q.atDesk === 'settled' ? requestStates.filter((s) => requestStateInfo[s].settled) : statesAtDesk(q.atDesk));
+  if (!seesDrafts(actor)) narrow(requestStates.filter((s) => s !== 'drafting'));
   return {
     // Auditors read every project; everyone else their own, looked up inside the list query.
     memberId: actor.role === 'auditor' ? undefined : actor.id,
@@ -112,7 +113,7 @@ export async function workflowFactsOf(db: Database, requestId: string): Promise<
 export async function detailFor(db: Database, actor: Actor, requestId: string): Promise<RequestDetail> {
   const found = await requestForReader(db, requestId, actor.id);
   // Same answer for "missing" and "not yours", so ids of other projects cannot be probed.
-  if (!found || !(actor.role === 'auditor' || found.member)) {
+  if (!found || !(actor.role === 'auditor' || found.member) || (found.summary.state === 'drafting' && !seesDrafts(actor))) {
     throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
   }
   const record = await recordOf(db, found);
@@ -185,7 +186,7 @@ async function recordOf(db: Database, found: NonNullable<Awaited<ReturnType<type
 
 export async function verifyFor(db: Database, actor: Actor, requestId: string) {
   const summary = await requestSummary(db, requestId);
-  if (!summary || !(await mayRead(db, actor, summary.project.id))) {
+  if (!summary || !(await mayReadRequest(db, actor, { projectId: summary.project.id, state: summary.state }))) {
     throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
   }
   const result = await verifyTrail(db, requestId);
@@ -195,6 +196,6 @@ export async function verifyFor(db: Database, actor: Actor, requestId: string) {
 // The engineers of record on the request's project, for central office to route or reassign to.
 export async function engineersOfRecordFor(db: Database, actor: Actor, requestId: string) {
   const row = await requestRow(db, requestId);
-  if (!row || !(await mayRead(db, actor, row.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+  if (!row || !(await mayReadRequest(db, actor, row.request))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
   return membersWithRole(db, row.request.projectId, 'engineer_of_record');
 }

@@ -360,7 +360,7 @@ export async function trailOf(db: Executor, requestId: string) {
 
 export async function attachmentWithProject(db: Database, attachmentId: string) {
   const [row] = await db
-    .select({ attachment: attachments, projectId: changeRequests.projectId })
+    .select({ attachment: attachments, projectId: changeRequests.projectId, state: changeRequests.state })
     .from(attachments)
     .innerJoin(changeRequests, eq(changeRequests.id, attachments.requestId))
     .where(eq(attachments.id, attachmentId));

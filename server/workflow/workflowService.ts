@@ -15,7 +15,7 @@ import type { WorkflowFacts } from '../../shared/workflow/rules';
 import { HttpError, validationError } from '../http/errors';
 import { queueMail } from '../mail/mailQueue';
 import { isProjectMember } from '../projects/projectRepository';
-import { mayRead } from '../requests/access';
+import { mayReadRequest } from '../requests/access';
 import { staleVersion } from '../requests/draftService';
 import { attachmentOfRequest, currentRevisionRow, lockRequest, membersWithRole, openConditionCount } from '../requests/requestRepository';
 import { appendTrailEvent, type RecordedAt } from '../trail/trailChain';
@@ -122,7 +122,7 @@ async function prepareMove(tx: Transaction, locked: Locked, input: WorkflowEvent
 export async function applyEvent(deps: { db: Database; publicUrl: string }, actor: Actor, requestId: string, input: WorkflowEventInput, when: RecordedAt = {}): Promise<void> {
   await deps.db.transaction(async (tx) => {
     const found = await lockRequest(tx, requestId);
-    if (!found || !(await mayRead(tx, actor, found.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+    if (!found || !(await mayReadRequest(tx, actor, found.request))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
     const locked = { ...found, actorId: actor.id };
     const r = found.request;
     if (r.version !== input.version) throw staleVersion(r.version);
@@ -188,7 +188,7 @@ export async function applyEvent(deps: { db: Database; publicUrl: string }, acto
 export async function addComment(db: Database, actor: Actor, requestId: string, comment: string, when: RecordedAt = {}): Promise<void> {
   await db.transaction(async (tx) => {
     const found = await lockRequest(tx, requestId);
-    if (!found || !(await mayRead(tx, actor, found.request.projectId))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+    if (!found || !(await mayReadRequest(tx, actor, found.request))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
     const r = found.request;
     if (!isRequestState(r.state)) throw new Error(`request ${r.id} has unknown state ${r.state}`);
     const member = await isProjectMember(tx, r.projectId, actor.id);

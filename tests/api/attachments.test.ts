@@ -53,12 +53,13 @@ describe('attachments', () => {
       const res = await upload(name, bytes);
       expect(res.status, `${name}: ${res.text}`).toBe(201);
       expect(res.body[0]).toMatchObject({ fileName: name, contentType: type, sizeBytes: bytes.length, sha256: sha256(bytes) });
-      const back = await a.section_engineer.get(`/api/attachments/${res.body[0].id}/content`).buffer(true).parse(binary);
+      // Read back by the auditor: a draft's files are the contractor's and the auditors' only.
+      const back = await a.auditor.get(`/api/attachments/${res.body[0].id}/content`).buffer(true).parse(binary);
       expect(back.status).toBe(200);
       expect(sha256(back.body as Buffer)).toBe(sha256(bytes));
       expect(back.headers['content-type']).toBe(type);
       expect(back.headers['content-disposition']).toBe(`inline; filename*=UTF-8''${encodeURIComponent(name)}`);
-      const saved = await a.section_engineer.get(`/api/attachments/${res.body[0].id}/content?download=1`).buffer(true).parse(binary);
+      const saved = await a.auditor.get(`/api/attachments/${res.body[0].id}/content?download=1`).buffer(true).parse(binary);
       expect(saved.headers['content-disposition']).toBe(`attachment; filename*=UTF-8''${encodeURIComponent(name)}`);
       expect(sha256(saved.body as Buffer)).toBe(sha256(bytes));
     }
@@ -151,7 +152,7 @@ describe('attachments', () => {
   it('makes a small preview of a photo, and none of a PDF', async () => {
     const photo = await samplePhoto(1600, 1200);
     const res = await upload('girder.jpg', photo);
-    const preview = await a.field_inspector.get(`/api/attachments/${res.body[0].id}/preview`).buffer(true).parse(binary);
+    const preview = await a.auditor.get(`/api/attachments/${res.body[0].id}/preview`).buffer(true).parse(binary);
     expect(preview.status).toBe(200);
     const meta = await sharp(preview.body as Buffer).metadata();
     expect(meta.format).toBe('jpeg');
@@ -171,8 +172,11 @@ describe('attachments', () => {
   });
 
   it('refuses uploads from the wrong desk or at the wrong time', async () => {
-    expect((await a.section_engineer.post(`/api/requests/${draftId}/attachments`).attach('files', await samplePdf(), 'x.pdf')).status).toBe(403);
-    expect((await a.field_inspector.post(`/api/requests/${draftId}/attachments?purpose=condition_evidence`).attach('files', await samplePhoto(), 'x.jpg')).status).toBe(409);
+    // A draft does not exist for the agency's desks; the auditor sees it but does not file.
+    expect((await a.section_engineer.post(`/api/requests/${draftId}/attachments`).attach('files', await samplePdf(), 'x.pdf')).status).toBe(404);
+    expect((await a.auditor.post(`/api/requests/${draftId}/attachments`).attach('files', await samplePdf(), 'x.pdf')).status).toBe(403);
+    expect((await a.field_inspector.post(`/api/requests/${draftId}/attachments?purpose=condition_evidence`).attach('files', await samplePhoto(), 'x.jpg')).status).toBe(404);
+    expect((await a.contractor.post(`/api/requests/${draftId}/attachments?purpose=information_response`).attach('files', await samplePdf(), 'x.pdf')).status).toBe(409);
     expect((await a.contractor.post(`/api/requests/${draftId}/attachments?purpose=secret`).attach('files', await samplePdf(), 'x.pdf')).status).toBe(400);
   });
 

@@ -178,7 +178,8 @@ describe('filing a request', () => {
     expect((await outsider.get(`/api/requests/${created.body.id}`)).status).toBe(404);
     expect((await outsider.get(`/api/attachments/${file.body[0].id}/content`)).status).toBe(404);
     expect((await outsider.get('/api/requests')).body.items.map((r: { id: string }) => r.id)).not.toContain(created.body.id);
-    expect((await (await signIn(t, s.fieldInspector.email)).get(`/api/requests/${created.body.id}`)).status).toBe(200);
+    // Still a draft: the contractor's own, even to the desks of its project.
+    expect((await (await signIn(t, s.fieldInspector.email)).get(`/api/requests/${created.body.id}`)).status).toBe(404);
     // Auditors trace every request, whatever project.
     expect((await (await signIn(t, s.outsiders.auditor.email)).get(`/api/requests/${created.body.id}`)).status).toBe(200);
     expect((await contractor.get('/api/requests/not-an-id')).status).toBe(404);

@@ -130,6 +130,24 @@ describe('GET /api/requests', () => {
     expect((await a.section_engineer.get('/api/requests/counts?cursor=x')).status).toBe(400);
   });
 
+  it('keeps drafts from the agency’s desks until they are submitted, in lists, counts and trail search alike', async () => {
+    const drafts = [ids['drafting-4']!, ids.deck!];
+    const listed = async (agent: (typeof a)[keyof typeof a]) => (await page(agent, `projectId=${s.project.id}&limit=50`)).items.map((r) => r.id);
+    for (const desk of ['section_engineer', 'central_office', 'engineer_of_record', 'field_inspector', 'admin'] as const) {
+      const seen = await listed(a[desk]);
+      expect(seen, desk).toHaveLength(6);
+      expect(seen.some((id) => drafts.includes(id)), desk).toBe(false);
+      const counts = await a[desk].get(`/api/requests/counts?projectId=${s.project.id}`);
+      expect(counts.body.byState.drafting, desk).toBeUndefined();
+      const trail = await a[desk].get(`/api/trail/search?structure=${encodeURIComponent(s.project.structureNumber)}&limit=50`);
+      expect(trail.status, trail.text).toBe(200);
+      expect(drafts.some((id) => trail.text.includes(id)), desk).toBe(false);
+    }
+    expect(await listed(a.contractor)).toEqual(expect.arrayContaining(drafts));
+    const auditorTrail = await a.auditor.get(`/api/trail/search?structure=${encodeURIComponent(s.project.structureNumber)}&limit=50`);
+    expect(drafts.every((id) => auditorTrail.text.includes(id))).toBe(true);
+  });
+
   it('refuses unknown filters and cursors it did not give out', async () => {
     expect((await a.contractor.get('/api/requests?state=lost')).status).toBe(400);
     expect((await a.contractor.get('/api/requests?colour=red')).status).toBe(400);

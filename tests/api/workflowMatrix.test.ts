@@ -37,6 +37,8 @@ const acceptedButNotReady: Partial<Record<RequestState, Partial<Record<WorkflowE
 function expectedStatus(state: RequestState, event: WorkflowEventType, role: Role, member: boolean): number {
   // A request of a project you are not on does not exist for you; auditors read every project.
   if (!member && role !== 'auditor') return 404;
+  // A draft is the contractor's own until submitted: to the agency's desks it does not exist.
+  if (state === 'drafting' && role !== 'contractor' && role !== 'auditor') return 404;
   const who = allowed[state]?.[event];
   const waiting = acceptedButNotReady[state]?.[event];
   const stateTakesIt = who !== undefined || waiting !== undefined;

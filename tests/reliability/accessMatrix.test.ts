@@ -48,6 +48,8 @@ const adminOnly204: PerRole = [403, 403, 403, 403, 403, 403, 204];
 // Reading one request or file: members and auditors; anyone else is told it does not exist.
 const readsMember: PerRole = everyone200;
 const readsOutsider: PerRole = [404, 404, 404, 404, 404, 200, 404];
+const draftReadsMember: PerRole = [200, 404, 404, 404, 404, 200, 404];
+const draftReadsOutsider: PerRole = readsOutsider;
 
 describe('the access matrix of every route', () => {
   let t: TestApp;
@@ -214,13 +216,17 @@ describe('the access matrix of every route', () => {
     { name: 'trail check', route: 'GET /api/requests/:id/trail/verify', out: 401, member: readsMember, outsider: readsOutsider, call: (c) => get(`/api/requests/${review}/trail/verify`)(c) },
     { name: 'engineers of record to route to', route: 'GET /api/requests/:id/engineers-of-record', out: 401, member: readsMember, outsider: readsOutsider,
       call: (c) => get(`/api/requests/${review}/engineers-of-record`)(c) },
-    { name: 'open a file', route: 'GET /api/attachments/:id/content', out: 401, member: readsMember, outsider: readsOutsider, call: (c) => get(`/api/attachments/${photo}/content`)(c) },
-    { name: 'a photo’s preview', route: 'GET /api/attachments/:id/preview', out: 401, member: readsMember, outsider: readsOutsider, call: (c) => get(`/api/attachments/${photo}/preview`)(c) },
+    { name: 'open a file', route: 'GET /api/attachments/:id/content', out: 401, member: readsMember, outsider: readsOutsider, call: (c) => get(`/api/attachments/${recordFile}/content`)(c) },
+    { name: 'a photo’s preview', route: 'GET /api/attachments/:id/preview', out: 401, member: readsMember, outsider: readsOutsider, call: (c) => get(`/api/attachments/${recordFile}/preview`)(c) },
+    // A draft is the contractor's until it is submitted; the auditor traces it from its start.
+    { name: 'a draft', route: 'GET /api/requests/:id', out: 401, member: draftReadsMember, outsider: draftReadsOutsider, call: (c) => get(`/api/requests/${draft}`)(c) },
+    { name: 'a draft’s trail as CSV', route: 'GET /api/requests/:id/trail.csv', out: 401, member: draftReadsMember, outsider: draftReadsOutsider, call: (c) => get(`/api/requests/${draft}/trail.csv`)(c) },
+    { name: 'a draft’s file', route: 'GET /api/attachments/:id/content', out: 401, member: draftReadsMember, outsider: draftReadsOutsider, call: (c) => get(`/api/attachments/${photo}/content`)(c) },
 
     // Writing: the contractor files; the one desk holding the request moves it; members comment.
     { name: 'start a request', route: 'POST /api/requests', out: 401, member: [201, 403, 403, 403, 403, 403, 403], outsider: [404, 403, 403, 403, 403, 403, 403],
       call: (c) => send('post', '/api/requests', () => otherDeviationBody(s.project.id, 'Shift the scupper at pier 1'))(c) },
-    { name: 'edit a draft', route: 'PUT /api/requests/:id/draft', out: 401, member: [200, 403, 403, 403, 403, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
+    { name: 'edit a draft', route: 'PUT /api/requests/:id/draft', out: 401, member: [200, 404, 404, 404, 404, 403, 404], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: (c) => send('put', `/api/requests/${draft}/draft`, async () => ({ version: await versionOf(draft), body: otherDeviationBody(s.project.id, 'Relocate drain outlet at pier 2, revised') }))(c) },
     { name: 'edit a request under review', route: 'PUT /api/requests/:id/draft', out: 401, member: [409, 403, 403, 403, 403, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: (c) => send('put', `/api/requests/${review}/draft`, async () => ({ version: await versionOf(review), body: otherDeviationBody(s.project.id) }))(c) },
@@ -232,13 +238,13 @@ describe('the access matrix of every route', () => {
       call: (c) => send('post', `/api/requests/${closed}/events`, async () => ({ version: await versionOf(closed), type: 'withdraw' }))(c) },
     { name: 'comment', route: 'POST /api/requests/:id/comments', out: 401, member: [201, 201, 201, 201, 201, 403, 201], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: (c) => send('post', `/api/requests/${review}/comments`, () => ({ comment: `Checked by ${c.label}.` }))(c) },
-    { name: 'add a drawing to a draft', route: 'POST /api/requests/:id/attachments', out: 401, member: [201, 403, 403, 403, 403, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
+    { name: 'add a drawing to a draft', route: 'POST /api/requests/:id/attachments', out: 401, member: [201, 404, 404, 404, 404, 403, 404], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: async (c) => upload(c.agent, draft, 'scupper.jpg', await samplePhoto(24, 24)) },
     { name: 'add evidence while conditions are open', route: 'POST /api/requests/:id/attachments', out: 401, member: [403, 403, 403, 403, 201, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: async (c) => upload(c.agent, withConditions, 'trial-batch.jpg', await samplePhoto(24, 24), 'condition_evidence') },
     { name: 'add a drawing under review', route: 'POST /api/requests/:id/attachments', out: 401, member: [409, 403, 403, 403, 403, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: async (c) => upload(c.agent, review, 'late.jpg', await samplePhoto(24, 24)) },
-    { name: 'remove a draft’s file', route: 'DELETE /api/requests/:id/attachments/:attachmentId', out: 401, member: [204, 403, 403, 403, 403, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
+    { name: 'remove a draft’s file', route: 'DELETE /api/requests/:id/attachments/:attachmentId', out: 401, member: [204, 404, 404, 404, 404, 403, 404], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: (c) => send('delete', `/api/requests/${draft}/attachments/${draftFile}`)(c) },
     { name: 'remove a file on the record', route: 'DELETE /api/requests/:id/attachments/:attachmentId', out: 401, member: [409, 403, 403, 403, 403, 403, 403], outsider: [404, 404, 404, 404, 404, 403, 404],
       call: (c) => send('delete', `/api/requests/${submittedWithFile}/attachments/${recordFile}`)(c) },

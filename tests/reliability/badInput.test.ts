@@ -440,7 +440,8 @@ describe('bad input', () => {
       expect(judge(created, 'hostile create', [201]), created.text).toBe(true);
       plainJson(created);
       id = created.body.id;
-      const back = (await a.section_engineer.get(`/api/requests/${id}`)) as Answer;
+      // Read back as the contractor: a draft is not yet the desks' to read.
+      const back = (await a.contractor.get(`/api/requests/${id}`)) as Answer;
       plainJson(back);
       expect(back.body.title).toBe(title);
       const revision = back.body.revisions?.at(-1)?.body ?? back.body.body;
