@@ -14,6 +14,7 @@ import { conditionRoutes } from './conditions/conditionRoutes';
 import { devMailRoutes } from './dev/devMailRoutes';
 import { healthRoutes } from './health/healthRoutes';
 import { errorHandler, HttpError } from './http/errors';
+import { gzippedAssets } from './http/gzippedAssets';
 import { refuseNulCharacters } from './http/nulCharacters';
 import { sameOriginWrites, securityHeaders } from './http/security';
 import type { Mailer } from './mail/mailer';
@@ -69,6 +70,7 @@ export function createApp(parts: AppParts) {
   // The exported web app: static files, and index.html for every client-side route.
   if (env.WEB_DIST && existsSync(join(env.WEB_DIST, 'index.html'))) {
     const dist = env.WEB_DIST;
+    app.use(gzippedAssets(dist, 60 * 60));
     app.use(express.static(dist, { index: false, maxAge: '1h' }));
     app.get('/{*splat}', (_req, res) => {
       res.setHeader('cache-control', 'no-cache');
