@@ -119,6 +119,15 @@ async function prepareMove(tx: Transaction, locked: Locked, input: WorkflowEvent
   }
 }
 
+// Whether someone who has just passed the read check (mayReadRequest) is a member of the project.
+// That check admits members and auditors only (server/requests/access.ts), and for anyone but an
+// auditor it has just asked the membership itself; asking again would be one more statement under
+// the request's lock on every move. The workflow matrix's outsiders of every role (404, never a
+// move) keep this in step with access.ts.
+async function membershipOfReader(tx: Transaction, reader: Actor, projectId: string): Promise<boolean> {
+  return reader.role === 'auditor' ? isProjectMember(tx, projectId, reader.id) : true;
+}
+
 export async function applyEvent(deps: { db: Database; publicUrl: string }, actor: Actor, requestId: string, input: WorkflowEventInput, when: RecordedAt = {}): Promise<void> {
   await deps.db.transaction(async (tx) => {
     const found = await lockRequest(tx, requestId);
@@ -135,7 +144,7 @@ export async function applyEvent(deps: { db: Database; publicUrl: string }, acto
       federalConcurrence: r.federalConcurrenceAttachmentId !== null,
       openConditions: await openConditionCount(tx, r.id),
     };
-    const member = await isProjectMember(tx, r.projectId, actor.id);
+    const member = await membershipOfReader(tx, actor, r.projectId);
     const verdict = evaluateEvent(stateBefore, facts, {
       type: input.type,
       actor: { id: actor.id, role: actor.role, member },
@@ -191,7 +200,7 @@ export async function addComment(db: Database, actor: Actor, requestId: string, 
     if (!found || !(await mayReadRequest(tx, actor, found.request))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
     const r = found.request;
     if (!isRequestState(r.state)) throw new Error(`request ${r.id} has unknown state ${r.state}`);
-    const member = await isProjectMember(tx, r.projectId, actor.id);
+    const member = await membershipOfReader(tx, actor, r.projectId);
     const facts: WorkflowFacts = { assignedEorId: r.assignedEorId, federalAid: found.federalAid, majorChange: r.majorChange, federalConcurrence: false, openConditions: 0 };
     const verdict = evaluateEvent(r.state, facts, { type: 'comment', actor: { id: actor.id, role: actor.role, member } });
     if (!verdict.allowed) throw new HttpError(verdict.status, verdict.code, verdict.code === 'not_your_move' ? 'Only the people working on this project comment on its requests.' : verdict.message);
