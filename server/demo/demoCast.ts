@@ -1,6 +1,7 @@
 // The demo scenario's agency, district, bridges, firms and people. All of them are invented; none
 // is a real agency, place, firm or person. The first person of each role signs in as
 // `<role>@demo.spanrelay.test`, the others as `first.last@demo.spanrelay.test`.
+import type { projects } from '../../db/schema';
 import type { Role } from '../../shared/roles';
 
 export const demoPassword = 'spanrelay-demo';
@@ -11,18 +12,8 @@ export const demoDistrict = 'Tallis District';
 
 export type DemoProjectKey = 'pellamCreek' | 'harrowRoad' | 'millRun';
 
-type DemoProjectFacts = {
-  code: string;
-  name: string;
-  structureNumber: string;
-  featureCarried: string;
-  featureCrossed: string;
-  county: string;
-  contractNumber: string;
-  contractorFirm: string;
-  section: string;
-  federalAid: boolean;
-  // What the drawings and the README say of the structure.
+// A project row as the seed writes it, plus what the drawings and the README say of the structure.
+type DemoProjectFacts = Required<Omit<typeof projects.$inferInsert, 'id' | 'deskDueDays' | 'nextRequestSeq' | 'createdAt'>> & {
   structure: string;
   spansFt: number[];
 };
