@@ -6,19 +6,21 @@ import { authClient } from './authClient';
 
 export const actorKey = ['actor'] as const;
 
+export const actorQuery = {
+  queryKey: actorKey,
+  queryFn: async (): Promise<Actor | null> => {
+    try {
+      return await apiFetch<Actor>('/api/me');
+    } catch (err) {
+      if (err instanceof ApiError && err.status === 401) return null;
+      throw err;
+    }
+  },
+  staleTime: 60_000,
+};
+
 export function useActor() {
-  return useQuery({
-    queryKey: actorKey,
-    queryFn: async (): Promise<Actor | null> => {
-      try {
-        return await apiFetch<Actor>('/api/me');
-      } catch (err) {
-        if (err instanceof ApiError && err.status === 401) return null;
-        throw err;
-      }
-    },
-    staleTime: 60_000,
-  });
+  return useQuery(actorQuery);
 }
 
 export function useSignIn() {
