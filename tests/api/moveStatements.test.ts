@@ -3,25 +3,14 @@
 // tell: begin, lock, membership (the read check), open conditions, the trail's last link with the
 // database clock, the trail event, the request, who is told, the outbox row, its delivery job,
 // commit. A comment: begin, lock, membership, last link and clock, the event, commit.
-import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Actor } from '../../shared/requests/types';
 import { addComment, applyEvent } from '../../server/workflow/workflowService';
 import { buildTestApp, createScenario, type TestApp } from '../support/apiHarness';
 import { agentsFor, requestAt } from '../support/requestFixtures';
+import { withStatementCount } from '../support/statementCounter';
 
-let statements = 0;
-const clientQuery = pg.Client.prototype.query;
-pg.Client.prototype.query = function countedQuery(this: pg.Client, ...args: unknown[]) {
-  statements += 1;
-  return (clientQuery as (...a: unknown[]) => unknown).apply(this, args);
-} as typeof clientQuery;
-
-async function counted(work: () => Promise<unknown>): Promise<number> {
-  statements = 0;
-  await work();
-  return statements;
-}
+const counted = async (work: () => Promise<unknown>): Promise<number> => (await withStatementCount(work)).statements;
 
 describe('statements per move', () => {
   let t: TestApp;

@@ -4,24 +4,16 @@
 // Each read is counted with the session not remembered (server/auth/sessionCache.ts), so the
 // lookup is part of every count and the difference is the read's own.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import pg from 'pg';
 import { forgetAllSessions } from '../../server/auth/sessionCache';
 import { buildTestApp, createScenario, signIn, type TestApp } from '../support/apiHarness';
 import { agentsFor, otherDeviationBody, requestAt } from '../support/requestFixtures';
-
-let statements = 0;
-const clientQuery = pg.Client.prototype.query;
-pg.Client.prototype.query = function countedQuery(this: pg.Client, ...args: unknown[]) {
-  statements += 1;
-  return (clientQuery as (...a: unknown[]) => unknown).apply(this, args);
-} as typeof clientQuery;
+import { withStatementCount } from '../support/statementCounter';
 
 type Agent = Awaited<ReturnType<typeof signIn>>;
 
 async function queriesOf(agent: Agent, path: string): Promise<number> {
   forgetAllSessions();
-  statements = 0;
-  const res = await agent.get(path);
+  const { result: res, statements } = await withStatementCount(() => agent.get(path));
   expect(res.status, res.text).toBe(200);
   return statements;
 }

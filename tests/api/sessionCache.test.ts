@@ -3,7 +3,6 @@
 // very next request, a tampered cookie is never answered from memory, and a remembered session
 // stops at its own expiry. Then the cache's own rules with a clock of our own.
 import request from 'supertest';
-import pg from 'pg';
 import { eq } from 'drizzle-orm';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -11,13 +10,7 @@ import { sessions } from '../../db/schema';
 import { createSessionCache, forgetAllSessions, sessionCacheMs, type FoundSession } from '../../server/auth/sessionCache';
 import { upsertAccount } from '../../server/people/accountRepository';
 import { buildTestApp, createScenario, signIn, testPassword, type TestApp } from '../support/apiHarness';
-
-let statements = 0;
-const clientQuery = pg.Client.prototype.query;
-pg.Client.prototype.query = function countedQuery(this: pg.Client, ...args: unknown[]) {
-  statements += 1;
-  return (clientQuery as (...a: unknown[]) => unknown).apply(this, args);
-} as typeof clientQuery;
+import { withStatementCount } from '../support/statementCounter';
 
 type Scenario = Awaited<ReturnType<typeof createScenario>>;
 
@@ -35,8 +28,7 @@ describe('remembered sessions in the app', () => {
   }
   const me = (cookie: string) => request(t.app).get('/api/me').set('cookie', cookie);
   async function countedMe(cookie: string) {
-    statements = 0;
-    const res = await me(cookie);
+    const { result: res, statements } = await withStatementCount(() => me(cookie));
     return { status: res.status, body: res.body as Record<string, unknown>, queries: statements };
   }
 
