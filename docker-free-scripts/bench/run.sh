@@ -4,16 +4,20 @@
 # of their own (56633-56636, clear of the dev and test instances), then the measurements
 # (main.ts). Everything it started is stopped at the end, whatever happens.
 # BENCH_SCALE=0.01 for a quick try; BENCH_SECONDS and BENCH_CONNECTIONS change the load runs.
+# BENCH_PORT_BASE moves all five ports (and gives the cluster and the files their own names), so a
+# second run can be held beside the first.
 set -euo pipefail
 source "$(dirname "${BASH_SOURCE[0]}")/../lib.sh"
 cd "$ROOT"
 
-PG_PORT=56632
-S3_PORT=56633
-SMTP_PORT=56634
-MAIL_CATCHER_PORT=56635
-APP_PORT=56636
-BENCH_DIR="$DATA/bench"
+PG_PORT="${BENCH_PORT_BASE:-56632}"
+S3_PORT=$((PG_PORT + 1))
+SMTP_PORT=$((PG_PORT + 2))
+MAIL_CATCHER_PORT=$((PG_PORT + 3))
+APP_PORT=$((PG_PORT + 4))
+CLUSTER=pg-bench
+export BENCH_DIR="$DATA/bench"
+if [ "$PG_PORT" != 56632 ]; then CLUSTER="pg-bench-$PG_PORT" BENCH_DIR="$DATA/bench-$PG_PORT"; fi
 mkdir -p "$BENCH_DIR"
 
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/spanrelay_bench"
@@ -30,7 +34,7 @@ SERVER_PID=""
 cleanup() {
   for pid in $SERVER_PID $FAKES_PID; do kill -TERM "$pid" 2>/dev/null || true; done
   for pid in $SERVER_PID $FAKES_PID; do wait "$pid" 2>/dev/null || true; done
-  pg_down pg-bench
+  pg_down "$CLUSTER"
 }
 trap cleanup EXIT
 trap 'exit 130' INT TERM
@@ -41,7 +45,7 @@ ensure_chromium
 if [ "${BENCH_WEB_EXPORT:-1}" = 1 ]; then ensure_web_export; fi
 export WEB_DIST="$ROOT/dist"
 
-pg_up pg-bench "$PG_PORT"
+pg_up "$CLUSTER" "$PG_PORT"
 # The trail refuses TRUNCATE and DELETE, so each run starts from a new database.
 pg_recreate_db "$PG_PORT" spanrelay_bench
 

@@ -14,7 +14,8 @@ export const benchSizes = {
 };
 
 export const benchPassword = 'bench-password-2718';
-export const benchDir = join(__dirname, '..', '..', '.data', 'bench');
+// run.sh sets BENCH_DIR (a run on other ports keeps its own files).
+export const benchDir = process.env.BENCH_DIR ?? join(__dirname, '..', '..', '.data', 'bench');
 export const seedInfoPath = join(benchDir, 'seed.json');
 export const resultsPath = join(benchDir, 'results.json');
 
