@@ -1,4 +1,5 @@
 // Requests, their revisions, conditions, attachments, trail and the mail they cause.
+import { sql } from 'drizzle-orm';
 import { pgTable, text, timestamp, uuid, integer, bigint, jsonb, bigserial, boolean, index, uniqueIndex, primaryKey } from 'drizzle-orm/pg-core';
 import { users } from './auth';
 import { projects } from './projects';
@@ -25,14 +26,20 @@ export const changeRequests = pgTable(
     federalConcurrenceAttachmentId: uuid('federal_concurrence_attachment_id'),
     // The time of the trail event that put the request on its current desk.
     deskSince: timestamp('desk_since', { withTimezone: true }).notNull().defaultNow(),
+    // When the request falls due at that desk ('infinity' once settled), kept by a trigger
+    // (drizzle/0004_request_due_at.sql) from the state, desk_since and the project's desk days, so
+    // desks sort and count overdue work through an index instead of computing it row by row.
+    dueAt: timestamp('due_at', { withTimezone: true }).notNull().default(sql`'infinity'::timestamptz`),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
     // A desk is some states on the reader's projects: both columns, so the desk list reads only its
     // own rows (it also serves every lookup by project alone).
-    index('change_requests_project_state_idx').on(t.projectId, t.state),
-    index('change_requests_state_idx').on(t.state),
+    // The due date last, so a desk reads its first page already in order: per project for a reader
+    // on a few projects, across all of them for one on most (central office).
+    index('change_requests_project_state_due_idx').on(t.projectId, t.state, t.dueAt, t.id),
+    index('change_requests_state_due_idx').on(t.state, t.dueAt, t.id),
     index('change_requests_desk_since_idx').on(t.deskSince, t.id),
     // The register's text search (ILIKE '%…%') on title and number, through trigrams (pg_trgm).
     index('change_requests_title_trgm_idx').using('gin', t.title.op('gin_trgm_ops')),
