@@ -1,9 +1,9 @@
 // Mail rides a job queue kept in PostgreSQL (graphile-worker). A message is written to
 // mail_outbox and its delivery job queued inside the transaction of the move that causes it, so no
 // mail goes out for a move that rolled back and none is lost to an SMTP outage. The outbox row's
-// unique idempotency key and its row lock at delivery mean one message per event and recipient,
-// even with retries and several server processes.
-import { eq, sql } from 'drizzle-orm';
+// unique idempotency key and its single delivery job (job key) mean one message per event and
+// recipient, even with retries and several server processes.
+import { and, eq, ne, sql } from 'drizzle-orm';
 import { run, type Runner, type Task } from 'graphile-worker';
 import type { Pool } from 'pg';
 import type { Database, Transaction } from '../../db/client';
@@ -30,22 +30,26 @@ export async function queueMail(tx: Transaction, mails: QueuedMail[]): Promise<n
   return queued;
 }
 
+// One delivery attempt. graphile-worker runs a job on one worker at a time and the outbox row has
+// exactly one job (its job key), so the attempt needs no row lock held across the SMTP exchange: a
+// read, the send, and one write to record it (two statements where a transaction took four).
+// A message sent whose record then fails is sent again on the retry, as it was when the commit after
+// the send failed; the Message-ID carries the idempotency key so a receiver can spot the repeat.
 export async function deliverQueuedMail(db: Database, mailer: Mailer, outboxId: string): Promise<void> {
-  const failure = await db.transaction(async (tx) => {
-    const [row] = await tx.select().from(mailOutbox).where(eq(mailOutbox.id, outboxId)).for('update');
-    if (!row || row.status === 'sent') return null;
-    try {
-      await mailer.send({ to: row.toAddress, subject: row.subject, text: row.body, messageId: `<${row.idempotencyKey}@spanrelay.mail>` });
-      await tx.update(mailOutbox).set({ status: 'sent', sentAt: sql`now()`, attempts: row.attempts + 1 }).where(eq(mailOutbox.id, row.id));
-      return null;
-    } catch (err) {
-      const message = err instanceof Error ? err.message : String(err);
-      await tx.update(mailOutbox).set({ attempts: row.attempts + 1, lastError: message.slice(0, 500) }).where(eq(mailOutbox.id, row.id));
-      return new Error(`mail ${row.id} to ${row.toAddress} not delivered: ${message}`);
-    }
-  });
-  // Thrown after the attempt is recorded, so graphile-worker retries with its backoff.
-  if (failure) throw failure;
+  const [row] = await db.select().from(mailOutbox).where(eq(mailOutbox.id, outboxId));
+  if (!row || row.status === 'sent') return;
+  try {
+    await mailer.send({ to: row.toAddress, subject: row.subject, text: row.body, messageId: `<${row.idempotencyKey}@spanrelay.mail>` });
+  } catch (err) {
+    const message = err instanceof Error ? err.message : String(err);
+    await db.update(mailOutbox).set({ attempts: sql`${mailOutbox.attempts} + 1`, lastError: message.slice(0, 500) }).where(eq(mailOutbox.id, row.id));
+    // Thrown after the attempt is recorded, so graphile-worker retries with its backoff.
+    throw new Error(`mail ${row.id} to ${row.toAddress} not delivered: ${message}`);
+  }
+  await db
+    .update(mailOutbox)
+    .set({ status: 'sent', sentAt: sql`now()`, attempts: sql`${mailOutbox.attempts} + 1` })
+    .where(and(eq(mailOutbox.id, row.id), ne(mailOutbox.status, 'sent')));
 }
 
 export type JobWorkerOptions = {

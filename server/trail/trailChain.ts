@@ -25,8 +25,13 @@ export type TrailAppend = {
   payload?: Record<string, unknown>;
 } & RecordedAt;
 
-export async function appendTrailEvent(tx: Transaction, input: TrailAppend) {
-  const last = await lastEventAndClock(tx, input.requestId);
+// The chain's last link as read under the request's lock (seq and hash absent before a request's
+// first event), with the database's clock at that moment.
+export type TrailLink = { seq: number | null; hash: string | null; clock: Date };
+
+// The next link of the chain: the event as hashed, its hash and the one before it. Shared by the
+// append below and a move's single record statement (server/workflow/moveStatements.ts).
+export function nextLink(last: TrailLink, input: TrailAppend) {
   // Milliseconds, so the time a JavaScript Date carries is exactly the time stored and hashed.
   const createdAt = input.at ? new Date(Math.floor(input.at.getTime())) : last.clock;
   // jsonb keeps numbers and strings as JSON has them; a round trip here makes the hashed payload
@@ -45,10 +50,14 @@ export async function appendTrailEvent(tx: Transaction, input: TrailAppend) {
     createdAt: createdAt.toISOString(),
   };
   const prevHash = last.hash ?? genesisHash;
-  const hash = trailHash(prevHash, event);
+  return { event, payload, createdAt, prevHash, hash: trailHash(prevHash, event) };
+}
+
+export async function appendTrailEvent(tx: Transaction, input: TrailAppend, last?: TrailLink) {
+  const link = nextLink(last ?? (await lastEventAndClock(tx, input.requestId)), input);
   const [row] = await tx
     .insert(trailEvents)
-    .values({ ...event, actorRole: input.actor.role, createdAt, prevHash, hash })
+    .values({ ...link.event, actorRole: input.actor.role, createdAt: link.createdAt, prevHash: link.prevHash, hash: link.hash })
     .returning();
   return row!;
 }
@@ -56,7 +65,7 @@ export async function appendTrailEvent(tx: Transaction, input: TrailAppend) {
 // The chain's last link and the database's clock in one statement (a move is a dozen statements
 // under the request's lock; each one less shortens the queue behind it). The clock row is always
 // there; the link is absent for a request's first event.
-async function lastEventAndClock(tx: Transaction, requestId: string): Promise<{ seq: number | null; hash: string | null; clock: Date }> {
+async function lastEventAndClock(tx: Transaction, requestId: string): Promise<TrailLink> {
   const { rows } = await tx.execute<{ seq: number | null; hash: string | null; at: Date | string }>(sql`
     select last.seq, last.hash, date_trunc('milliseconds', clock_timestamp()) as at
     from (select 1) as one

@@ -1,11 +1,9 @@
 // Who is told of each move, and what the message says: what happened, what is asked of the reader,
-// and the link. The actor is never mailed about their own move.
-import type { Executor } from './executor';
-import { membersWithRole, userById } from '../requests/requestRepository';
+// and the link. The actor is never mailed about their own move. The people come with the request's
+// row lock (server/workflow/moveStatements.ts), so telling them costs the move no statement of its own.
 import { requestStateInfo, stateLabel, type RequestState } from '../../shared/requests/states';
 import { roleLabels, type Role } from '../../shared/roles';
 import { workflowEventPastTense, type WorkflowEventType } from '../../shared/workflow/events';
-import type { QueuedMail } from '../mail/mailQueue';
 
 type Audience = 'filer' | 'section_engineers' | 'central_office' | 'assigned_eor' | 'previous_eor' | 'field_inspectors' | 'desk_before';
 
@@ -28,6 +26,38 @@ const audiences: Record<WorkflowEventType, Audience[]> = {
   record_federal_concurrence: ['assigned_eor'],
 };
 
+const audienceRole: Partial<Record<Audience, Role>> = {
+  section_engineers: 'section_engineer',
+  central_office: 'central_office',
+  field_inspectors: 'field_inspector',
+};
+
+// The project roles whose members a move may tell, known before the request is read: its audiences,
+// the desks above a closing condition (closedByThisMove), and for a withdrawal any desk it may have
+// been at (desk_before; the engineer of record's desk is one person, found by id).
+export function rolesToTell(eventType: WorkflowEventType): Role[] {
+  const wanted = new Set<Role>();
+  for (const audience of audiences[eventType]) {
+    const role = audienceRole[audience];
+    if (role) wanted.add(role);
+  }
+  if (eventType === 'satisfy_condition') wanted.add('section_engineer').add('central_office');
+  if (eventType === 'withdraw') wanted.add('section_engineer').add('central_office').add('field_inspector');
+  return [...wanted];
+}
+
+// Besides the request's filer and assigned engineer of record, the one person a move may name: the
+// engineer of record it routes or reassigns to.
+export function personNamedBy(input: { type: WorkflowEventType; eorUserId?: string }): string | null {
+  return input.type === 'route' || input.type === 'reassign' ? (input.eorUserId ?? null) : null;
+}
+
+export type Person = { id: string; name: string; email: string; role: Role };
+
+// Members of the project holding the roles asked for (by name, as a desk lists them), and the
+// people found by id (filer, engineers of record).
+export type PeopleToTell = { members: Person[]; byId: Map<string, Person> };
+
 const deskAsks: Partial<Record<RequestState, string>> = {
   section_review: 'Check it against the field, then forward it to central office with your comments, or return it for revision.',
   central_routing: 'Route it to an engineer of record (on a federal-aid project, also classify the change), or return it for revision.',
@@ -38,9 +68,8 @@ const deskAsks: Partial<Record<RequestState, string>> = {
 };
 
 export type NotificationContext = {
-  db: Executor;
+  people: PeopleToTell;
   publicUrl: string;
-  trailEventId: number;
   eventType: WorkflowEventType;
   request: { id: string; number: string; title: string; projectId: string; filedById: string; projectName: string; structureNumber: string };
   stateBefore: RequestState;
@@ -52,26 +81,21 @@ export type NotificationContext = {
   closedByThisMove: boolean;
 };
 
-type Person = { id: string; name: string; email: string; role: Role };
-
-async function withRole(ctx: NotificationContext, role: Role): Promise<Person[]> {
-  return (await membersWithRole(ctx.db, ctx.request.projectId, role)).map((p) => ({ ...p, role }));
-}
-
-async function peopleFor(ctx: NotificationContext, audience: Audience): Promise<Person[]> {
-  const byId = async (id: string | null) => {
-    const u = id ? await userById(ctx.db, id) : null;
-    return u ? [{ id: u.id, name: u.name, email: u.email, role: u.role as Role }] : [];
+function peopleFor(ctx: NotificationContext, audience: Audience): Person[] {
+  const withRole = (role: Role) => ctx.people.members.filter((p) => p.role === role);
+  const byId = (id: string | null) => {
+    const person = id ? ctx.people.byId.get(id) : undefined;
+    return person ? [person] : [];
   };
   switch (audience) {
     case 'filer':
       return byId(ctx.request.filedById);
     case 'section_engineers':
-      return withRole(ctx, 'section_engineer');
+      return withRole('section_engineer');
     case 'central_office':
-      return withRole(ctx, 'central_office');
+      return withRole('central_office');
     case 'field_inspectors':
-      return withRole(ctx, 'field_inspector');
+      return withRole('field_inspector');
     case 'assigned_eor':
       return byId(ctx.assignedEorId);
     case 'previous_eor':
@@ -79,21 +103,25 @@ async function peopleFor(ctx: NotificationContext, audience: Audience): Promise<
     case 'desk_before': {
       const desk = requestStateInfo[ctx.stateBefore].desk;
       if (desk === 'engineer_of_record') return byId(ctx.assignedEorId);
-      return desk && desk !== 'contractor' ? withRole(ctx, desk) : [];
+      return desk && desk !== 'contractor' ? withRole(desk) : [];
     }
   }
 }
 
-export async function notificationsFor(ctx: NotificationContext): Promise<QueuedMail[]> {
+// One message to one person; the outbox key (trail event and address) is added as the move's
+// trail event is written (server/workflow/moveStatements.ts).
+export type MoveMail = { to: string; subject: string; text: string };
+
+export function notificationsFor(ctx: NotificationContext): MoveMail[] {
   const wanted = [...audiences[ctx.eventType]];
   if (ctx.closedByThisMove) wanted.push('section_engineers', 'central_office');
   const recipients = new Map<string, Person>();
-  for (const audience of wanted) for (const p of await peopleFor(ctx, audience)) recipients.set(p.email, p);
+  for (const audience of wanted) for (const p of peopleFor(ctx, audience)) recipients.set(p.email, p);
 
   const desk = requestStateInfo[ctx.stateAfter].desk;
   const r = ctx.request;
   const what = workflowEventPastTense[ctx.eventType];
-  const mails: QueuedMail[] = [];
+  const mails: MoveMail[] = [];
   for (const person of recipients.values()) {
     if (person.id === ctx.actor.id) continue;
     const atTheirDesk =
@@ -102,9 +130,7 @@ export async function notificationsFor(ctx: NotificationContext): Promise<Queued
       (desk !== 'contractor' || person.id === r.filedById);
     const ask = atTheirDesk ? `It is now at your desk. ${deskAsks[ctx.stateAfter] ?? ''}`.trim() : 'Nothing is asked of you; this is for your information.';
     mails.push({
-      idempotencyKey: `trail:${ctx.trailEventId}:${person.email}`,
       to: person.email,
-      requestId: r.id,
       subject: `${r.number}: ${what.toLowerCase()}${atTheirDesk ? ' (at your desk)' : ''}`,
       text: [
         `Hello ${person.name},`,

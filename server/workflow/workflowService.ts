@@ -1,9 +1,10 @@
 // Applies one workflow move. Under the request's row lock it checks the version the client saw,
 // asks the shared machine whether this actor may make the move now, and then writes in one
-// transaction: the new state and version, one trail event, and the mail jobs.
+// transaction: the new state and version, one trail event, and the mail jobs. The statements that
+// every move sends are in moveStatements.ts.
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import type { Database, Transaction } from '../../db/client';
-import { attachments, changeRequests, requestConditions, requestRevisions } from '../../db/schema';
+import { attachments, requestConditions, requestRevisions } from '../../db/schema';
 import { EngineeringInputError } from '../../shared/engineering';
 import { engineeringCheckFor } from '../../shared/requests/engineeringCheck';
 import { requestBodySchema } from '../../shared/requests/requestBody';
@@ -13,17 +14,16 @@ import { evaluateEvent } from '../../shared/workflow/evaluate';
 import type { WorkflowEventInput } from '../../shared/workflow/events';
 import type { WorkflowFacts } from '../../shared/workflow/rules';
 import { HttpError, validationError } from '../http/errors';
-import { queueMail } from '../mail/mailQueue';
-import { isProjectMember } from '../projects/projectRepository';
-import { mayReadRequest } from '../requests/access';
+import { seesDrafts } from '../requests/access';
 import { staleVersion } from '../requests/draftService';
-import { attachmentOfRequest, currentRevisionRow, lockRequest, membersWithRole, openConditionCount } from '../requests/requestRepository';
-import { appendTrailEvent, type RecordedAt } from '../trail/trailChain';
-import { notificationsFor } from './notifications';
+import { attachmentOfRequest, currentRevisionRow, membersWithRole } from '../requests/requestRepository';
+import { appendTrailEvent, nextLink, type RecordedAt } from '../trail/trailChain';
+import { factsUnderLock, lockForMove, recordMove, type LockedForMove, type RequestChange } from './moveStatements';
+import { notificationsFor, personNamedBy, rolesToTell } from './notifications';
 import { queueDecisionRecord } from '../documents/decisionRecordJob';
 
-type Locked = NonNullable<Awaited<ReturnType<typeof lockRequest>>> & { actorId: string };
-type Change = Partial<typeof changeRequests.$inferInsert>;
+type Locked = LockedForMove & { actorId: string };
+type Change = RequestChange;
 
 // Checks that need the database, and the side writes a move carries; returns the trail payload.
 async function prepareMove(tx: Transaction, locked: Locked, input: WorkflowEventInput, change: Change, when: RecordedAt): Promise<Record<string, unknown>> {
@@ -119,35 +119,36 @@ async function prepareMove(tx: Transaction, locked: Locked, input: WorkflowEvent
   }
 }
 
-// Whether someone who has just passed the read check (mayReadRequest) is a member of the project.
-// That check admits members and auditors only (server/requests/access.ts), and for anyone but an
-// auditor it has just asked the membership itself; asking again would be one more statement under
-// the request's lock on every move. The workflow matrix's outsiders of every role (404, never a
-// move) keep this in step with access.ts.
-async function membershipOfReader(tx: Transaction, reader: Actor, projectId: string): Promise<boolean> {
-  return reader.role === 'auditor' ? isProjectMember(tx, projectId, reader.id) : true;
+// Who may read a request (server/requests/access.ts, mayReadRequest): members of its project and
+// auditors, and a draft only its contractor and auditors. The membership comes with the lock, so the
+// check costs no statement; the workflow matrix's outsiders of every role keep this in step.
+function mayReadLocked(actor: Actor, locked: LockedForMove): boolean {
+  if (locked.request.state === 'drafting' && !seesDrafts(actor)) return false;
+  return actor.role === 'auditor' || locked.member;
 }
+
+const notFound = () => new HttpError(404, 'request_not_found', 'No request you can see has that id.');
 
 export async function applyEvent(deps: { db: Database; publicUrl: string }, actor: Actor, requestId: string, input: WorkflowEventInput, when: RecordedAt = {}): Promise<void> {
   await deps.db.transaction(async (tx) => {
-    const found = await lockRequest(tx, requestId);
-    if (!found || !(await mayReadRequest(tx, actor, found.request))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+    const found = await lockForMove(tx, requestId, actor.id, { roles: rolesToTell(input.type), personId: personNamedBy({ type: input.type, eorUserId: 'eorUserId' in input ? input.eorUserId : undefined }) });
+    if (!found || !mayReadLocked(actor, found)) throw notFound();
     const locked = { ...found, actorId: actor.id };
     const r = found.request;
     if (r.version !== input.version) throw staleVersion(r.version);
     if (!isRequestState(r.state)) throw new Error(`request ${r.id} has unknown state ${r.state}`);
     const stateBefore: RequestState = r.state;
+    const { openConditions, link } = await factsUnderLock(tx, r.id);
     const facts: WorkflowFacts = {
       assignedEorId: r.assignedEorId,
       federalAid: found.federalAid,
       majorChange: r.majorChange,
       federalConcurrence: r.federalConcurrenceAttachmentId !== null,
-      openConditions: await openConditionCount(tx, r.id),
+      openConditions,
     };
-    const member = await membershipOfReader(tx, actor, r.projectId);
     const verdict = evaluateEvent(stateBefore, facts, {
       type: input.type,
-      actor: { id: actor.id, role: actor.role, member },
+      actor: { id: actor.id, role: actor.role, member: found.member },
       eorUserId: 'eorUserId' in input ? input.eorUserId : undefined,
       conditionCount: input.type === 'approve_with_conditions' ? input.conditions.length : undefined,
       majorChange: input.type === 'classify_change' ? input.majorChange : undefined,
@@ -157,27 +158,11 @@ export async function applyEvent(deps: { db: Database; publicUrl: string }, acto
     const change: Change = {};
     const payload = await prepareMove(tx, locked, input, change, when);
     const stateAfter = verdict.nextState;
-    const event = await appendTrailEvent(tx, {
-      requestId: r.id,
-      eventType: input.type,
-      stateBefore,
-      stateAfter,
-      actor,
-      comment: input.comment ?? null,
-      payload,
-      at: when.at,
-    });
-    // The desk clock restarts when the request reaches another desk or another engineer.
-    const newDesk = stateAfter !== stateBefore || input.type === 'reassign';
-    await tx
-      .update(changeRequests)
-      .set({ ...change, state: stateAfter, version: r.version + 1, updatedAt: event.createdAt, ...(newDesk ? { deskSince: event.createdAt } : {}) })
-      .where(eq(changeRequests.id, r.id));
-
-    const mails = await notificationsFor({
-      db: tx,
+    const comment = input.comment ?? null;
+    const next = nextLink(link, { requestId: r.id, eventType: input.type, stateBefore, stateAfter, actor, comment, payload, at: when.at });
+    const mails = notificationsFor({
+      people: found.people,
       publicUrl: deps.publicUrl,
-      trailEventId: event.id,
       eventType: input.type,
       request: { id: r.id, number: r.number, title: change.title ?? r.title, projectId: r.projectId, filedById: r.filedById, projectName: found.projectName, structureNumber: found.structureNumber },
       stateBefore,
@@ -185,10 +170,24 @@ export async function applyEvent(deps: { db: Database; publicUrl: string }, acto
       assignedEorId: change.assignedEorId ?? r.assignedEorId,
       previousEorId: input.type === 'reassign' ? r.assignedEorId : null,
       actor: { id: actor.id, name: actor.name, role: actor.role },
-      comment: input.comment ?? null,
+      comment,
       closedByThisMove: stateAfter === 'closed' && input.type === 'satisfy_condition',
     });
-    await queueMail(tx, mails);
+    await recordMove(tx, {
+      requestId: r.id,
+      link: { seq: next.event.seq, prevHash: next.prevHash, hash: next.hash, createdAt: next.createdAt },
+      eventType: input.type,
+      stateBefore,
+      stateAfter,
+      actor,
+      comment,
+      payload: next.payload,
+      version: r.version + 1,
+      // The desk clock restarts when the request reaches another desk or another engineer.
+      newDesk: stateAfter !== stateBefore || input.type === 'reassign',
+      change,
+      mails,
+    });
     if (input.type === 'approve' || input.type === 'approve_with_conditions' || input.type === 'reject') await queueDecisionRecord(tx, r.id, actor.id);
   });
 }
@@ -196,13 +195,12 @@ export async function applyEvent(deps: { db: Database; publicUrl: string }, acto
 // A comment is on the record (a trail event) but moves nothing, so it needs no version.
 export async function addComment(db: Database, actor: Actor, requestId: string, comment: string, when: RecordedAt = {}): Promise<void> {
   await db.transaction(async (tx) => {
-    const found = await lockRequest(tx, requestId);
-    if (!found || !(await mayReadRequest(tx, actor, found.request))) throw new HttpError(404, 'request_not_found', 'No request you can see has that id.');
+    const found = await lockForMove(tx, requestId, actor.id, null);
+    if (!found || !mayReadLocked(actor, found)) throw notFound();
     const r = found.request;
     if (!isRequestState(r.state)) throw new Error(`request ${r.id} has unknown state ${r.state}`);
-    const member = await membershipOfReader(tx, actor, r.projectId);
     const facts: WorkflowFacts = { assignedEorId: r.assignedEorId, federalAid: found.federalAid, majorChange: r.majorChange, federalConcurrence: false, openConditions: 0 };
-    const verdict = evaluateEvent(r.state, facts, { type: 'comment', actor: { id: actor.id, role: actor.role, member } });
+    const verdict = evaluateEvent(r.state, facts, { type: 'comment', actor: { id: actor.id, role: actor.role, member: found.member } });
     if (!verdict.allowed) throw new HttpError(verdict.status, verdict.code, verdict.code === 'not_your_move' ? 'Only the people working on this project comment on its requests.' : verdict.message);
     await appendTrailEvent(tx, { requestId: r.id, eventType: 'commented', stateBefore: r.state, stateAfter: r.state, actor, comment, at: when.at });
   });
