@@ -9,11 +9,12 @@ import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { TextField } from '../ui/TextField';
 import { AuthCard, AuthLink } from './AuthCard';
-import { authClient } from './authClient';
+import { loadAuthClient } from './loadAuthClient';
 
 export function ForgotPasswordScreen() {
   const request = useMutation({
     mutationFn: async ({ email }: ForgotPasswordValues) => {
+      const authClient = await loadAuthClient('The request did not go through; try again.');
       const { error } = await authClient.requestPasswordReset({ email });
       if (error) throw new ApiError(error.status, error.code ?? 'reset_request_failed', error.message || 'The request did not go through; try again.');
     },

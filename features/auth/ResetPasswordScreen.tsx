@@ -9,7 +9,7 @@ import { ApiError } from '../api/http';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { AuthCard, AuthLink } from './AuthCard';
-import { authClient } from './authClient';
+import { loadAuthClient } from './loadAuthClient';
 import { NewPasswordFields } from './NewPasswordFields';
 
 const spentLink = 'This link has expired or was already used. Ask for a new one; each link works once, within an hour.';
@@ -18,6 +18,7 @@ export function ResetPasswordScreen() {
   const { token } = useLocalSearchParams<{ token?: string }>();
   const reset = useMutation({
     mutationFn: async ({ password }: NewPasswordValues) => {
+      const authClient = await loadAuthClient('The password was not changed; try again.');
       const { error } = await authClient.resetPassword({ newPassword: password, token: token ?? '' });
       if (!error) return;
       const code = error.code ?? 'reset_failed';

@@ -1,8 +1,9 @@
 // Who is signed in, with the role and organization Spanrelay keeps on the account.
+import { useEffect } from 'react';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Actor } from '../../shared/requests/types';
 import { apiFetch, ApiError } from '../api/http';
-import { authClient } from './authClient';
+import { loadAuthClient } from './loadAuthClient';
 
 export const actorKey = ['actor'] as const;
 
@@ -25,8 +26,13 @@ export function useActor() {
 
 export function useSignIn() {
   const queryClient = useQueryClient();
+  // Fetched while the e-mail and password are typed, so the button does not wait for it.
+  useEffect(() => {
+    loadAuthClient('').catch(() => undefined);
+  }, []);
   return useMutation({
     mutationFn: async (input: { email: string; password: string }) => {
+      const authClient = await loadAuthClient(signInMessage(0, undefined));
       const { error } = await authClient.signIn.email(input);
       if (error) throw new ApiError(error.status, error.code ?? 'sign_in_failed', signInMessage(error.status, error.message));
     },
@@ -44,6 +50,7 @@ export function useSignOut() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async () => {
+      const authClient = await loadAuthClient('Signing out failed; try again.');
       await authClient.signOut();
     },
     onSuccess: () => {
