@@ -5,16 +5,17 @@ import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { Text } from '../ui/Text';
 import { radius, space } from '../ui/theme';
 import { deckFigures, findingsOf, jointFigures, sealFigures, type CheckLike } from './checkFigures';
-import { DeckCheckPlots } from './DeckCheckPlots';
 import { EngineeringCaution } from './EngineeringCaution';
 import { PlotInset } from './Inset';
-import { JointCheckPlots } from './JointCheckPlots';
-import { SealCheckPlots } from './SealCheckPlots';
+import { useCheckPlots } from './lazyCheckPlots';
 import { useMeasuredWidth } from './useMeasuredWidth';
 import { verdictOf } from './verdict';
 
 function Plots({ check, width }: { check: CheckLike; width: number }) {
-  if (width <= 0) return null;
+  // Asked for as soon as the view is shown, while its width is being measured.
+  const plots = useCheckPlots();
+  if (width <= 0 || !plots) return null;
+  const { DeckCheckPlots, JointCheckPlots, SealCheckPlots } = plots;
   if (check.kind === 'deck_placement_change') {
     const f = deckFigures(check);
     return f ? <DeckCheckPlots figures={f} width={width} /> : null;

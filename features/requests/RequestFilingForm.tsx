@@ -6,6 +6,7 @@ import { useEffect, useReducer, useRef, useState, type ReactNode } from 'react';
 import { get, useForm, useWatch, type FieldErrors, type FieldPath } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { StyleSheet, View } from 'react-native';
+import { loadCheckPlots } from '../engineering/lazyCheckPlots';
 import type { RequestBody, RequestDraft, RequestType } from '../../shared/requests/requestBody';
 import type { AttachmentSummary, ProjectSummary } from '../../shared/requests/types';
 import { FieldError } from '../ui/Choice';
@@ -92,6 +93,12 @@ export function RequestFilingForm(props: Props) {
   const type = useWatch({ control, name: 'type' });
   const errors = formState.errors;
   const needsDataSheet = type === 'joint_seal_substitution';
+
+  // The check's plots load apart from the first screen: fetch them as the form opens, so they are
+  // on hand for the live check even if the connection goes while the figures are typed.
+  useEffect(() => {
+    void loadCheckPlots();
+  }, []);
 
   // Every change is offered to the device copy; the screen decides when to write it.
   useEffect(() => {
