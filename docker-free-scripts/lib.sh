@@ -74,9 +74,10 @@ pg_data_dir() {
   fi
 }
 
-# pg_up NAME PORT: a private cluster listening on 127.0.0.1:PORT only.
+# pg_up NAME PORT [SERVER_OPTIONS]: a private cluster listening on 127.0.0.1:PORT only; options
+# such as "-c shared_buffers=1GB" apply when it starts.
 pg_up() {
-  local name="$1" port="$2"
+  local name="$1" port="$2" extra="${3:-}"
   ensure_postgres_binaries
   local dir sock="/tmp/spanrelay-pg-$port"
   dir="$(pg_data_dir "$name")"
@@ -89,7 +90,7 @@ pg_up() {
   if ! pg_as_owner "$PG_BIN/pg_ctl" -D "$dir" status >/dev/null 2>&1; then
     log "starting PostgreSQL $name on 127.0.0.1:$port"
     pg_as_owner "$PG_BIN/pg_ctl" -D "$dir" -l "$sock/postgres.log" -w -t 60 \
-      -o "-c listen_addresses=127.0.0.1 -p $port -k $sock" start >/dev/null
+      -o "-c listen_addresses=127.0.0.1 -p $port -k $sock $extra" start >/dev/null
   fi
 }
 
