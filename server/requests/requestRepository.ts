@@ -7,6 +7,7 @@ import { deskDueAt, deskOf } from '../../shared/requests/deskClock';
 import type { RequestSort } from '../../shared/requests/listQuery';
 import type { AttachmentSummary, RequestSummary } from '../../shared/requests/types';
 import type { DeskDueDays } from '../../shared/workflow/desks';
+import { narrowReaderProjects, projectsOfReader } from './readerBreadth';
 import type { Role } from '../../shared/roles';
 
 type Executor = Database | Transaction;
@@ -132,7 +133,14 @@ async function projectsNamed(db: Database, like: string): Promise<string[]> {
 async function filterConditions(db: Database, f: RequestFilter): Promise<(SQL | undefined)[]> {
   const where: (SQL | undefined)[] = [];
   if (f.projectIds) where.push(f.projectIds.length ? inArray(changeRequests.projectId, f.projectIds) : sql`false`);
-  if (f.memberId) where.push(inArray(changeRequests.projectId, db.select({ id: projectMembers.projectId }).from(projectMembers).where(eq(projectMembers.userId, f.memberId))));
+  if (f.memberId) {
+    const memberProjects = db.select({ id: projectMembers.projectId }).from(projectMembers).where(eq(projectMembers.userId, f.memberId));
+    where.push(
+      (await projectsOfReader(db, f.memberId)) <= narrowReaderProjects
+        ? sql`${changeRequests.projectId} = any(array(${memberProjects}))`
+        : inArray(changeRequests.projectId, memberProjects),
+    );
+  }
   if (f.states) where.push(f.states.length ? inArray(changeRequests.state, f.states) : sql`false`);
   if (f.assignedEorId) where.push(eq(changeRequests.assignedEorId, f.assignedEorId));
   if (f.type) where.push(eq(changeRequests.type, f.type));

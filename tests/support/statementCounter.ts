@@ -4,15 +4,19 @@
 import pg from 'pg';
 
 let statements = 0;
+let texts: string[] = [];
 const clientQuery = pg.Client.prototype.query;
 pg.Client.prototype.query = function countedQuery(this: pg.Client, ...args: unknown[]) {
   statements += 1;
+  const first = args[0] as string | { text?: string } | undefined;
+  texts.push(typeof first === 'string' ? first : (first?.text ?? ''));
   return (clientQuery as (...a: unknown[]) => unknown).apply(this, args);
 } as typeof clientQuery;
 
-// The work's result and the statements sent while it ran.
-export async function withStatementCount<T>(work: () => PromiseLike<T>): Promise<{ result: T; statements: number }> {
+// The work's result and the statements sent while it ran (how many, and their SQL).
+export async function withStatementCount<T>(work: () => PromiseLike<T>): Promise<{ result: T; statements: number; texts: string[] }> {
   statements = 0;
+  texts = [];
   const result = await work();
-  return { result, statements };
+  return { result, statements, texts };
 }
