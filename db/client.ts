@@ -3,7 +3,7 @@ import { drizzle, type NodePgDatabase } from 'drizzle-orm/node-postgres';
 import { Pool, type PoolClient } from 'pg';
 import * as schema from './schema';
 
-export type Database = NodePgDatabase<typeof schema>;
+export type Database = NodePgDatabase<typeof schema> & { $client: Pool };
 export type Transaction = Parameters<Parameters<Database['transaction']>[0]>[0];
 
 export function createDatabase(url: string, max = 10): { db: Database; pool: Pool } {

@@ -54,6 +54,12 @@ function printTable(seed: SeedInfo, routes: RouteFigures[], web: WebFigures, eng
     lines.push(`${pad(f.route, 16)}${lpad(f.requestsPerSecond, 9)}${lpad(f.p50Ms, 9)}${lpad(f.p95Ms, 9)}${lpad(f.p99Ms, 9)}${lpad(f.errors, 8)}${lpad(f.ratioToBaseline?.toFixed(2) ?? '', 8)}${lpad(alone, 15)}  ${verdict(f)}`);
   }
   lines.push('"alone": the same route at one connection, the time a request takes when it queues behind no other.');
+  // A closed loop: each connection sends its next request when the last is answered, so the mean
+  // latency is connections ÷ throughput (Little's law) and a p95 target is a throughput target.
+  const needs = Object.entries(targets)
+    .filter(([, t]) => t.p95Ms !== undefined)
+    .map(([route, t]) => `${route} p95 ≤ ${t.p95Ms} ms needs more than ${Math.round((connections * 1000) / t.p95Ms!)} req/s`);
+  lines.push(`at ${connections} connections the mean latency is ${connections} ÷ throughput, so: ${needs.join('; ')}`);
   const js = web.initialJs;
   lines.push(`web: initial JS ${js.rawKb} KB raw, ${js.gzipKb} KB gzip (${js.gzipKb <= webTargets.initialGzipKb ? 'met' : 'MISSED'} ≤ ${webTargets.initialGzipKb}); all JS ${web.allJs.rawKb} KB raw, ${web.allJs.gzipKb} KB gzip in ${web.allJs.files} files`);
   lines.push(`web: first desk list rendered, median of ${web.firstDesk.loadsMs.length} cold loads ${web.firstDesk.medianMs} ms (${web.firstDesk.loadsMs.join(', ')}) (${web.firstDesk.medianMs <= webTargets.firstDeskMs ? 'met' : 'MISSED'} ≤ ${webTargets.firstDeskMs})`);

@@ -1,5 +1,6 @@
 // Database access for requests. Writes run inside the service's transaction, under the request's
 // row lock taken by `lockRequest`.
+import { createHash } from 'node:crypto';
 import { aliasedTable, and, asc, count, desc, eq, gt, ilike, inArray, isNull, lt, or, sql, type SQL } from 'drizzle-orm';
 import type { Database, Transaction } from '../../db/client';
 import { attachments, changeRequests, projectMembers, projects, requestConditions, requestRevisions, trailEvents, users } from '../../db/schema';
@@ -130,13 +131,18 @@ async function projectsNamed(db: Database, like: string): Promise<string[]> {
   return rows.map((r) => r.id);
 }
 
-async function filterConditions(db: Database, f: RequestFilter): Promise<(SQL | undefined)[]> {
+// The conditions, and whether one plan suits every reader of this shape of query: true for a reader
+// on a few projects without a text search, whose projects are an array the planner cannot size
+// anyway. Text and a reader on most projects get a plan made for their values.
+async function filterConditions(db: Database, f: RequestFilter): Promise<{ where: (SQL | undefined)[]; onePlanFits: boolean }> {
   const where: (SQL | undefined)[] = [];
+  let narrowReader = false;
   if (f.projectIds) where.push(f.projectIds.length ? inArray(changeRequests.projectId, f.projectIds) : sql`false`);
   if (f.memberId) {
     const memberProjects = db.select({ id: projectMembers.projectId }).from(projectMembers).where(eq(projectMembers.userId, f.memberId));
+    narrowReader = (await projectsOfReader(db, f.memberId)) <= narrowReaderProjects;
     where.push(
-      (await projectsOfReader(db, f.memberId)) <= narrowReaderProjects
+      narrowReader
         ? sql`${changeRequests.projectId} = any(array(${memberProjects}))`
         : inArray(changeRequests.projectId, memberProjects),
     );
@@ -151,7 +157,7 @@ async function filterConditions(db: Database, f: RequestFilter): Promise<(SQL | 
     const named = await projectsNamed(db, like);
     where.push(or(ilike(changeRequests.title, like), ilike(changeRequests.number, like), named.length ? inArray(changeRequests.projectId, named) : undefined));
   }
-  return where;
+  return { where, onePlanFits: narrowReader && !f.text };
 }
 
 // A page in two round trips: the ids in order from change_requests alone (a short query the planner
@@ -160,7 +166,7 @@ async function filterConditions(db: Database, f: RequestFilter): Promise<(SQL | 
 // planning alone took longer (1.5 ms) than reading the page.
 export async function listRequests(db: Database, f: RequestFilter, order: RequestPageOrder, limit: number): Promise<{ summary: RequestSummary; sortKey: string }[]> {
   const { key, descending } = sortColumns[order.sort];
-  const where = await filterConditions(db, f);
+  const { where, onePlanFits } = await filterConditions(db, f);
   if (order.after) {
     const k = sql`${order.after.key}::timestamptz`;
     where.push(
@@ -169,12 +175,15 @@ export async function listRequests(db: Database, f: RequestFilter, order: Reques
         : sql`(${key} > ${k} or (${key} = ${k} and ${changeRequests.id} > ${order.after.id}))`,
     );
   }
-  const page = await db
+  const pageQuery = db
     .select({ id: changeRequests.id, sortKey: sql<string>`(${key})::text`.as('sort_key') })
     .from(changeRequests)
     .where(and(...where))
     .orderBy(descending ? desc(key) : asc(key), descending ? desc(changeRequests.id) : asc(changeRequests.id))
     .limit(limit);
+  // Where one plan fits, the statement is named after its text, so each connection parses and
+  // plans a desk's shape once (0.5 ms of PostgreSQL's 1 ms for a section engineer's desk page).
+  const page = onePlanFits ? await namedPage(db, pageQuery.toSQL()) : await pageQuery;
   if (page.length === 0) return [];
   const rows = await preparedRead(db, 'request_summaries', () =>
     summaryQuery(db)
@@ -191,6 +200,14 @@ export async function listRequests(db: Database, f: RequestFilter, order: Reques
   });
 }
 
+// The page's ids through a statement named after its text: the same shape gets the same name on
+// every connection, and pg sends the text only the first time on each.
+async function namedPage(db: Database, query: { sql: string; params: unknown[] }): Promise<{ id: string; sortKey: string }[]> {
+  const name = `list_${createHash('sha1').update(query.sql).digest('hex').slice(0, 20)}`;
+  const result = await db.$client.query<{ id: string; sort_key: string }>({ name, text: query.sql, values: query.params });
+  return result.rows.map((r) => ({ id: r.id, sortKey: r.sort_key }));
+}
+
 // How many requests match, per state, and how many are past due at their desk.
 export async function countRequests(db: Database, f: RequestFilter): Promise<{ state: string; n: number; overdue: number }[]> {
   return db
@@ -200,7 +217,7 @@ export async function countRequests(db: Database, f: RequestFilter): Promise<{ s
       overdue: sql<number>`(count(*) filter (where ${changeRequests.dueAt} < now()))::int`,
     })
     .from(changeRequests)
-    .where(and(...(await filterConditions(db, f))))
+    .where(and(...(await filterConditions(db, f)).where))
     .groupBy(changeRequests.state);
 }
 
