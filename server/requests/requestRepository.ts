@@ -3,6 +3,7 @@
 import { createHash } from 'node:crypto';
 import { aliasedTable, and, asc, count, desc, eq, gt, ilike, inArray, isNull, lt, or, sql, type SQL } from 'drizzle-orm';
 import type { Database, Transaction } from '../../db/client';
+import { runNamed } from '../../db/namedStatements';
 import { attachments, changeRequests, projectMembers, projects, requestConditions, requestRevisions, trailEvents, users } from '../../db/schema';
 import { deskDueAt, deskOf } from '../../shared/requests/deskClock';
 import type { RequestSort } from '../../shared/requests/listQuery';
@@ -209,8 +210,8 @@ export async function listRequests(db: Database, f: RequestFilter, order: Reques
 // every connection, and pg sends the text only the first time on each.
 async function namedPage(db: Database, query: { sql: string; params: unknown[] }): Promise<{ id: string; sortKey: string }[]> {
   const name = `list_${createHash('sha1').update(query.sql).digest('hex').slice(0, 20)}`;
-  const result = await db.$client.query<{ id: string; sort_key: string }>({ name, text: query.sql, values: query.params });
-  return result.rows.map((r) => ({ id: r.id, sortKey: r.sort_key }));
+  const rows = await runNamed<{ id: string; sort_key: string }>(db, name, query.sql, query.params);
+  return rows.map((r) => ({ id: r.id, sortKey: r.sort_key }));
 }
 
 // How many requests match, per state, and how many are past due at their desk.

@@ -8,7 +8,7 @@
 import type { Transaction } from '../../db/client';
 import type { Role } from '../../shared/roles';
 import type { TrailLink } from '../trail/trailChain';
-import { runNamed } from './namedStatements';
+import { runNamed } from '../../db/namedStatements';
 import type { MoveMail, PeopleToTell, Person } from './notifications';
 
 export type MoveRequest = {
