@@ -16,16 +16,18 @@ export class HttpError extends Error {
 }
 
 export function validationError(error: ZodError, message = 'Some fields need attention.'): HttpError {
-  const fields: Record<string, string> = {};
+  // A Map, not an object literal: a sender's key "__proto__" must be named like any other, and
+  // assigning it on a plain object would set the prototype and leave the field list empty.
+  const fields = new Map<string, string>();
   for (const issue of error.issues) {
     if (issue.code === 'unrecognized_keys') {
-      for (const key of issue.keys) fields[key] = 'This field is not accepted here.';
+      for (const key of issue.keys) fields.set(key, 'This field is not accepted here.');
     } else {
       const key = issue.path.join('.') || '_';
-      fields[key] ??= issue.message;
+      if (!fields.has(key)) fields.set(key, issue.message);
     }
   }
-  return new HttpError(400, 'invalid_input', message, fields);
+  return new HttpError(400, 'invalid_input', message, Object.fromEntries(fields));
 }
 
 const multerMessages: Record<string, [number, string]> = {

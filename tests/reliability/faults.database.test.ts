@@ -89,7 +89,11 @@ describe('a database restart under load', () => {
       const running = [...ids.map(desk), watchHealth()];
       await sleep(1500);
       phase = 'restart';
-      await cluster!.restart();
+      // The outage lasts until health has said so (or 10 s): a fast machine can stop and start the
+      // cluster between two polls, and then "down" would never be seen.
+      await cluster!.restart(async () => {
+        for (const until = Date.now() + 10_000; Date.now() < until && !health.includes('down'); ) await sleep(50);
+      });
       phase = 'after';
       // Wait for moves to go through again after the restart, within bounds.
       const deadline = Date.now() + 30_000;

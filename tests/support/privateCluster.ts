@@ -38,7 +38,8 @@ export type PrivateCluster = {
   port: number;
   // A fresh migrated database on this cluster.
   migratedDatabase(name: string): Promise<string>;
-  restart(): Promise<void>;
+  // whileDown runs between the stop and the start, so a test can watch the outage itself.
+  restart(whileDown?: () => Promise<void>): Promise<void>;
   stop(): Promise<void>;
   // Stops the cluster if it runs and removes its folder.
   destroy(): Promise<void>;
@@ -82,9 +83,13 @@ export async function startPrivateCluster(): Promise<PrivateCluster> {
     },
     // What `pg_ctl restart -m fast` does (open sessions are cut off, as in an operator's restart),
     // in two steps so the server's log keeps going to its file and not to this process's pipe.
-    async restart() {
+    async restart(whileDown) {
       await ctl('-m', 'fast', '-w', '-t', '60', 'stop');
-      await started();
+      try {
+        await whileDown?.();
+      } finally {
+        await started();
+      }
     },
     async stop() {
       if (await running()) await ctl('-m', 'fast', '-w', 'stop');

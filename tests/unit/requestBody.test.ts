@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { requestBodySchema, requestDraftSchema } from '../../shared/requests/requestBody';
 import { validationError } from '../../server/http/errors';
+import { conditionListQuerySchema } from '../../shared/conditions/listQuery';
 import { deckPlacementBody, otherDeviationBody } from '../support/requestFixtures';
 
 const projectId = '0b6f3c8e-4a8e-4f3b-9a0e-5b1d2c3e4f5a';
@@ -22,6 +23,13 @@ describe('request body schemas (shared by the form and the server)', () => {
   it('refuses fields it does not know, so a client cannot set state or numbers itself', () => {
     const result = requestBodySchema.safeParse({ ...otherDeviationBody(projectId), state: 'closed' });
     expect(validationError(result.error!).fields).toEqual({ state: 'This field is not accepted here.' });
+  });
+
+  it('names a refused key "__proto__" like any other, in the JSON the client reads', () => {
+    const result = conditionListQuerySchema.safeParse(JSON.parse('{"__proto__": "x"}'));
+    const fields = validationError(result.error!).fields!;
+    expect(Object.keys(fields)).toEqual(['__proto__']);
+    expect(JSON.parse(JSON.stringify({ fields })).fields).toEqual(JSON.parse('{"__proto__": "This field is not accepted here."}'));
   });
 
   it('needs an amount for a credit or an added cost, and none for no cost', () => {
